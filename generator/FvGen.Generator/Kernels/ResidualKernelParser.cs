@@ -1,0 +1,447 @@
+using System;
+using System.Collections.Generic;
+using System.Linq;
+using System.Threading;
+using FvGen.Generator.Common;
+using FvGen.Generator.Diagnostics;
+using FvGen.Generator.Fluxes;
+using FvGen.Generator.States;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.CSharp.Syntax;
+
+namespace FvGen.Generator.Kernels;
+
+/// <summary>
+/// Turns a method marked <c>[ResidualKernel]</c> into a <see cref="ResidualKernelModel"/>, or into
+/// problems. The generator and <see cref="FvGenUsageAnalyzer"/> share it, so what is reported is
+/// exactly what is not generated.
+/// </summary>
+internal static class ResidualKernelParser
+{
+    private const string GeneratorPathMarker = "FvGen.Generator";
+
+    public static ResidualKernelModel? Parse(IMethodSymbol method, AttributeData attribute, List<Problem>? problems, CancellationToken cancellationToken)
+    {
+        var location = method.Locations.Length > 0 ? method.Locations[0] : null;
+        var type = method.ContainingType;
+        if (type is null)
+        {
+            return null;
+        }
+
+        // Shape: static partial void, declared without a body, in partial types.
+        var declaration = DefiningDeclaration(method, cancellationToken);
+        string? shape = null;
+        if (!method.IsStatic)
+        {
+            shape = "it is not static";
+        }
+        else if (!method.ReturnsVoid)
+        {
+            shape = "it returns " + method.ReturnType.ToDisplayString();
+        }
+        else if (declaration is null || !declaration.Modifiers.Any(SyntaxKind.PartialKeyword))
+        {
+            shape = "it is not partial, or it has a body";
+        }
+        else if (method.IsGenericMethod)
+        {
+            shape = "it is generic";
+        }
+        else if (method.PartialImplementationPart is { } implementation && !IsGenerated(implementation))
+        {
+            shape = "it already has an implementation part";
+        }
+
+        if (shape is not null)
+        {
+            problems?.Add(new Problem(Descriptors.KernelNotStaticPartialVoid, location, method.Name, shape));
+            return null;
+        }
+
+        for (INamedTypeSymbol? t = type; t is not null; t = t.ContainingType)
+        {
+            if (!TypeLocation.IsPartial(t, cancellationToken))
+            {
+                problems?.Add(new Problem(Descriptors.ContainingTypeNotPartial, location, method.Name, t.Name));
+                return null;
+            }
+        }
+
+        string typeName = type.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat);
+        bool ok = true;
+
+        // Parameters: one role each.
+        var parameters = new List<KernelParameter>();
+        ITypeSymbol? stateType = null;
+        MeshKind? mesh = null;
+        foreach (var p in method.Parameters)
+        {
+            var (role, element, meshKind, isMemory, why) = Classify(p, type);
+            if (why is not null)
+            {
+                problems?.Add(new Problem(Descriptors.KernelParameters, First(p) ?? location, method.Name, why));
+                ok = false;
+                continue;
+            }
+
+            if (parameters.Any(existing => existing.Role == role))
+            {
+                problems?.Add(new Problem(
+                    Descriptors.KernelParameters, First(p) ?? location, method.Name, "parameter '" + p.Name + "' is a second " + Describe(role)));
+                ok = false;
+                continue;
+            }
+
+            if (element is not null)
+            {
+                if (stateType is null)
+                {
+                    stateType = element;
+                }
+                else if (!SymbolEqualityComparer.Default.Equals(stateType, element))
+                {
+                    problems?.Add(new Problem(
+                        Descriptors.KernelParameters,
+                        First(p) ?? location,
+                        method.Name,
+                        "parameter '" + p.Name + "' holds " + element.ToDisplayString() + " but the kernel's state is " + stateType.ToDisplayString()));
+                    ok = false;
+                    continue;
+                }
+            }
+
+            mesh ??= meshKind;
+            string prefix = p.ScopedKind == ScopedKind.ScopedValue ? "scoped " : "";
+            parameters.Add(new KernelParameter(p.Name, role, TypeText(p, role, element, typeName), isMemory, prefix));
+        }
+
+        if (!ok)
+        {
+            return null;
+        }
+
+        foreach (var required in new[] { ParameterRole.Mesh, ParameterRole.State, ParameterRole.Residual })
+        {
+            if (!parameters.Any(p => p.Role == required))
+            {
+                problems?.Add(new Problem(Descriptors.KernelParameters, location, method.Name, "it has no " + Describe(required) + " parameter"));
+                ok = false;
+            }
+        }
+
+        if (!ok || stateType is not INamedTypeSymbol stateSymbol || mesh is null)
+        {
+            return null;
+        }
+
+        var state = ConservedStateParser.Parse(stateSymbol, problems: null, cancellationToken);
+        if (state is null)
+        {
+            problems?.Add(new Problem(
+                Descriptors.KernelParameters, location, method.Name, "its state '" + stateSymbol.ToDisplayString() + "' is not a valid [ConservedState] struct"));
+            return null;
+        }
+
+        // The numerical flux named by the attribute, in the kernel's type.
+        string? fluxName = attribute.ConstructorArguments.Length == 1 ? attribute.ConstructorArguments[0].Value as string : null;
+        var fluxMethod = fluxName is null
+            ? null
+            : type.GetMembers(fluxName).OfType<IMethodSymbol>().FirstOrDefault(m => HasAttribute(m, KnownNames.NumericalFluxAttribute));
+        if (fluxMethod is null)
+        {
+            problems?.Add(new Problem(Descriptors.KernelFluxNotFound, location, method.Name, fluxName ?? "(none)", type.Name));
+            return null;
+        }
+
+        var flux = FluxSignature.Numerical(fluxMethod, problems: null);
+        if (flux is null)
+        {
+            problems?.Add(new Problem(
+                Descriptors.KernelFluxNotFound, location, method.Name, fluxName!, type.Name + " (its signature is wrong, see FVG0003 there)"));
+            return null;
+        }
+
+        if (!SymbolEqualityComparer.Default.Equals(flux.Value.State, stateType))
+        {
+            problems?.Add(new Problem(
+                Descriptors.FluxStateMismatch, location, method.Name, stateType.Name, "numerical flux", fluxMethod.Name, flux.Value.State.Name));
+            return null;
+        }
+
+        var boundaries = BoundaryFluxesOf(type);
+        if (boundaries.Count == 0 && parameters.Any(p => p.Role == ParameterRole.Boundaries))
+        {
+            problems?.Add(new Problem(
+                Descriptors.KernelParameters,
+                location,
+                method.Name,
+                "it takes a boundary binding, but '" + type.Name + "' declares no valid [BoundaryFlux] method to bind patches to"));
+            return null;
+        }
+
+        foreach (var (entry, boundaryState) in boundaries)
+        {
+            if (!SymbolEqualityComparer.Default.Equals(boundaryState, stateType))
+            {
+                problems?.Add(new Problem(
+                    Descriptors.FluxStateMismatch, location, method.Name, stateType.Name, "boundary flux", entry.Call.Name, boundaryState.Name));
+                ok = false;
+            }
+        }
+
+        if (!ok)
+        {
+            return null;
+        }
+
+        // Mode and reconstruction.
+        var mode = (KernelMode)NamedInt(attribute, "Mode", 0);
+        var reconstruction = (KernelReconstruction)NamedInt(attribute, "Reconstruction", 0);
+        var limiter = (KernelLimiter)NamedInt(attribute, "Limiter", 0);
+        string? modeProblem = CheckMode(mode, mesh.Value, parameters);
+        if (modeProblem is not null)
+        {
+            problems?.Add(new Problem(Descriptors.ModeNotAvailable, location, method.Name, modeProblem));
+            return null;
+        }
+
+        string? reconstructionProblem = CheckReconstruction(reconstruction, limiter, mesh.Value, mode);
+        if (reconstructionProblem is not null)
+        {
+            problems?.Add(new Problem(Descriptors.ReconstructionNotAvailable, location, method.Name, reconstructionProblem));
+            return null;
+        }
+
+        string modifiers = string.Join(" ", declaration!.Modifiers.Select(m => m.Text));
+        return new ResidualKernelModel(
+            TypeLocation.Of(type),
+            typeName,
+            method.Name,
+            modifiers,
+            mesh.Value,
+            state,
+            new EquatableArray<KernelParameter>(parameters),
+            flux.Value.Call,
+            new EquatableArray<BoundaryFluxEntry>(boundaries.Select(b => b.Entry)),
+            mode,
+            reconstruction,
+            limiter);
+    }
+
+    /// <summary>The valid boundary fluxes of <paramref name="type"/>, ordered by name (the order of the <c>Boundary</c> enum).</summary>
+    public static List<(BoundaryFluxEntry Entry, ITypeSymbol State)> BoundaryFluxesOf(INamedTypeSymbol type)
+    {
+        var found = new List<(BoundaryFluxEntry, ITypeSymbol)>();
+        foreach (var member in type.GetMembers())
+        {
+            if (member is not IMethodSymbol m)
+            {
+                continue;
+            }
+
+            foreach (var a in m.GetAttributes())
+            {
+                if (a.AttributeClass?.ToDisplayString() == KnownNames.BoundaryFluxAttribute && FluxSignature.Boundary(m, a, problems: null) is { } entry)
+                {
+                    found.Add(entry);
+                    break;
+                }
+            }
+        }
+
+        found.Sort((x, y) => string.CompareOrdinal(x.Item1.Call.Name, y.Item1.Call.Name));
+        return found;
+    }
+
+    private static (ParameterRole Role, ITypeSymbol? Element, MeshKind? Mesh, bool IsMemory, string? Why) Classify(IParameterSymbol p, INamedTypeSymbol kernelType)
+    {
+        if (p.RefKind != RefKind.None)
+        {
+            return (default, null, null, false, "parameter '" + p.Name + "' must be passed by value");
+        }
+
+        if (p.Type is not INamedTypeSymbol named)
+        {
+            return (default, null, null, false, Unknown(p));
+        }
+
+        string original = named.OriginalDefinition.ToDisplayString();
+        switch (original)
+        {
+            case KnownNames.StructuredGrid1D:
+                return (ParameterRole.Mesh, null, MeshKind.Structured1D, false, null);
+            case KnownNames.StructuredGrid2D:
+                return (ParameterRole.Mesh, null, MeshKind.Structured2D, false, null);
+            case KnownNames.StructuredGrid3D:
+                return (ParameterRole.Mesh, null, MeshKind.Structured3D, false, null);
+            case KnownNames.UnstructuredMesh:
+                return (ParameterRole.Mesh, null, MeshKind.Unstructured, false, null);
+            case KnownNames.BoundaryFluxTally:
+                return (ParameterRole.Tally, null, null, false, null);
+            case KnownNames.ParallelOptions:
+                return (ParameterRole.ParallelOptions, null, null, false, null);
+            case "System.ReadOnlySpan<T>":
+            case "System.ReadOnlyMemory<T>":
+            case "System.Span<T>":
+            case "System.Memory<T>":
+                var element = named.TypeArguments[0];
+                if (!ConservedStateParser.IsConservedState(element))
+                {
+                    return (default, null, null, false, "parameter '" + p.Name + "' holds " + element.ToDisplayString() + ", which is not a [ConservedState] struct");
+                }
+
+                bool readOnly = original.StartsWith("System.ReadOnly", StringComparison.Ordinal);
+                bool memory = original.EndsWith("Memory<T>", StringComparison.Ordinal);
+                bool faceData = p.GetAttributes().Any(a => a.AttributeClass?.ToDisplayString() == KnownNames.FaceDataAttribute);
+                if (readOnly && faceData)
+                {
+                    return (default, null, null, false, "face buffer '" + p.Name + "' must be writable (Span or Memory)");
+                }
+
+                var role = readOnly ? ParameterRole.State : faceData ? ParameterRole.FaceBuffer : ParameterRole.Residual;
+                return (role, element, null, memory, null);
+        }
+
+        if (named.OriginalDefinition.MetadataName == "BoundaryBinding`1"
+            && named.OriginalDefinition.ContainingNamespace?.ToDisplayString() == "FvGen.Boundaries")
+        {
+            var argument = named.TypeArguments[0];
+            bool ours = argument.Name == KnownNames.BoundaryEnumName
+                && (argument.TypeKind == TypeKind.Error || SymbolEqualityComparer.Default.Equals(argument.ContainingType, kernelType));
+            return ours
+                ? (ParameterRole.Boundaries, null, null, false, null)
+                : (default, null, null, false, "boundary binding '" + p.Name + "' must be a BoundaryBinding<Boundary> of the kernel's own type (the enum the generator writes from its [BoundaryFlux] methods)");
+        }
+
+        return (default, null, null, false, Unknown(p));
+    }
+
+    private static string Unknown(IParameterSymbol p) =>
+        "parameter '" + p.Name + "' of type " + p.Type.ToDisplayString()
+        + " is none of: a mesh (StructuredGrid1D/2D/3D, UnstructuredMesh), the state (ReadOnlySpan or ReadOnlyMemory of the state), the residual (Span or Memory), "
+        + "a [FaceData] face buffer, a BoundaryBinding<Boundary>, a BoundaryFluxTally, ParallelOptions";
+
+    private static string TypeText(IParameterSymbol p, ParameterRole role, ITypeSymbol? element, string kernelType)
+    {
+        string nullable = p.NullableAnnotation == NullableAnnotation.Annotated ? "?" : "";
+        if (role == ParameterRole.Boundaries)
+        {
+            return "global::FvGen.Boundaries.BoundaryBinding<" + kernelType + "." + KnownNames.BoundaryEnumName + ">" + nullable;
+        }
+
+        if (element is not null && p.Type is INamedTypeSymbol named)
+        {
+            string container = named.OriginalDefinition.ToDisplayString();
+            container = container.Substring(0, container.Length - "<T>".Length);
+            return "global::" + container + "<" + element.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat) + ">";
+        }
+
+        return p.Type.WithNullableAnnotation(NullableAnnotation.NotAnnotated).ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat) + nullable;
+    }
+
+    private static string? CheckMode(KernelMode mode, MeshKind mesh, List<KernelParameter> parameters)
+    {
+        if (!Enum.IsDefined(typeof(KernelMode), mode))
+        {
+            return "execution mode " + (int)mode + " is not a member of FvGen.ExecutionMode";
+        }
+
+        if (mode == KernelMode.SerialScatter)
+        {
+            return parameters.Any(p => p.Role == ParameterRole.FaceBuffer) ? "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather" : null;
+        }
+
+        if (mesh != MeshKind.Unstructured)
+        {
+            return "ExecutionMode." + mode + " is generated for unstructured meshes; structured grids run SerialScatter";
+        }
+
+        if (!parameters.Any(p => p.Role == ParameterRole.State && p.IsMemory) || !parameters.Any(p => p.Role == ParameterRole.Residual && p.IsMemory))
+        {
+            return "ExecutionMode." + mode + " shares the state and residual with worker threads: declare them as ReadOnlyMemory<TState> and Memory<TState> (spans cannot cross threads)";
+        }
+
+        bool hasBuffer = parameters.Any(p => p.Role == ParameterRole.FaceBuffer && p.IsMemory);
+        if (mode == KernelMode.ParallelGather && !hasBuffer)
+        {
+            return "ExecutionMode.ParallelGather needs a face buffer: add a '[FaceData] Memory<TState>' parameter of at least mesh.FaceCount states (allocate it once per mesh)";
+        }
+
+        if (mode != KernelMode.ParallelGather && parameters.Any(p => p.Role == ParameterRole.FaceBuffer))
+        {
+            return "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather";
+        }
+
+        return null;
+    }
+
+    private static string? CheckReconstruction(KernelReconstruction reconstruction, KernelLimiter limiter, MeshKind mesh, KernelMode mode)
+    {
+        if (!Enum.IsDefined(typeof(KernelReconstruction), reconstruction))
+        {
+            return "reconstruction " + (int)reconstruction + " is not a member of FvGen.ReconstructionKind";
+        }
+
+        if (!Enum.IsDefined(typeof(KernelLimiter), limiter))
+        {
+            return "limiter " + (int)limiter + " is not a member of FvGen.LimiterKind";
+        }
+
+        return reconstruction switch
+        {
+            KernelReconstruction.FirstOrder => null,
+            KernelReconstruction.User => "ReconstructionKind.User is not generated by this version of FvGen; use FirstOrder or Linear",
+            _ when mesh == MeshKind.Unstructured => "ReconstructionKind.Linear (Green-Gauss gradients with Barth-Jespersen) is not generated for unstructured meshes by this version of FvGen; use FirstOrder there",
+            _ when limiter == KernelLimiter.BarthJespersen => "the Barth-Jespersen limiter is for unstructured meshes; MUSCL on structured grids takes Minmod, VanLeer, MonotonizedCentral or Superbee",
+            _ => null,
+        };
+    }
+
+    private static int NamedInt(AttributeData attribute, string name, int fallback)
+    {
+        foreach (var pair in attribute.NamedArguments)
+        {
+            if (pair.Key == name && pair.Value.Value is int value)
+            {
+                return value;
+            }
+        }
+
+        return fallback;
+    }
+
+    private static MethodDeclarationSyntax? DefiningDeclaration(IMethodSymbol method, CancellationToken cancellationToken)
+    {
+        var definition = method.PartialDefinitionPart ?? method;
+        foreach (var reference in definition.DeclaringSyntaxReferences)
+        {
+            if (reference.GetSyntax(cancellationToken) is MethodDeclarationSyntax { Body: null, ExpressionBody: null } syntax)
+            {
+                return syntax;
+            }
+        }
+
+        return null;
+    }
+
+    private static bool IsGenerated(IMethodSymbol implementation) =>
+        implementation.DeclaringSyntaxReferences.All(r => r.SyntaxTree.FilePath.IndexOf(GeneratorPathMarker, StringComparison.Ordinal) >= 0);
+
+    private static bool HasAttribute(ISymbol symbol, string name) =>
+        symbol.GetAttributes().Any(a => a.AttributeClass?.ToDisplayString() == name);
+
+    private static string Describe(ParameterRole role) => role switch
+    {
+        ParameterRole.Mesh => "mesh",
+        ParameterRole.State => "state (ReadOnlySpan<TState> or ReadOnlyMemory<TState>)",
+        ParameterRole.Residual => "residual (Span<TState> or Memory<TState>)",
+        ParameterRole.Boundaries => "boundary binding",
+        ParameterRole.Tally => "boundary flux tally",
+        ParameterRole.ParallelOptions => "ParallelOptions",
+        _ => "face buffer",
+    };
+
+    private static Location? First(ISymbol symbol) => symbol.Locations.Length > 0 ? symbol.Locations[0] : null;
+}

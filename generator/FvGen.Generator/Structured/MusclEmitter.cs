@@ -1,0 +1,84 @@
+using FvGen.Generator.Common;
+using FvGen.Generator.Kernels;
+
+namespace FvGen.Generator.Structured;
+
+/// <summary>
+/// Writes MUSCL face states on structured grids: each cell's slope along the face direction is the
+/// backward difference times a limiter φ(θ) of the ratio θ of forward to backward differences,
+/// component by component, and the face sees each cell's value extrapolated half a cell.
+/// </summary>
+/// <remarks>
+/// Limiters as functions of θ (LeVeque, Finite Volume Methods for Hyperbolic Problems, 2002, ch. 6):
+/// minmod max(0, min(1, θ)); van Leer (θ + |θ|)/(1 + |θ|); MC max(0, min((1 + θ)/2, 2, 2θ));
+/// superbee max(0, min(1, 2θ), min(2, θ)). All are zero for θ ≤ 0, so a cell at an extremum keeps a
+/// zero slope. Slopes are taken in index space (exact for uniform spacing). A cell next to a
+/// boundary patch along the face direction has no second neighbour there and keeps a zero slope;
+/// boundary faces see the cell average.
+/// </remarks>
+internal static class MusclEmitter
+{
+    public static void Declare(IndentedWriter w, ResidualKernelModel model, int dim)
+    {
+        string[] axes = { "x", "y", "z" };
+        for (int d = 0; d < dim; d++)
+        {
+            w.Line("bool " + axes[d] + "Periodic = mesh.IsPeriodic(" + d + ");");
+        }
+
+        w.Line();
+        w.Line("// " + model.Limiter + " limiter φ(θ), θ = forward / backward difference; the slope is φ(θ) · backward.");
+        w.Line("[global::System.Runtime.CompilerServices.MethodImpl(global::System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]");
+        w.Open("static double LimitedSlope(double backward, double forward)");
+        w.Line("if (backward * forward <= 0.0)");
+        w.Open();
+        w.Line("return 0.0;");
+        w.Close();
+        w.Line();
+        w.Line("double theta = forward / backward;");
+        w.Line(model.Limiter switch
+        {
+            KernelLimiter.VanLeer => "double phi = (theta + global::System.Math.Abs(theta)) / (1.0 + global::System.Math.Abs(theta));",
+            KernelLimiter.MonotonizedCentral => "double phi = global::System.Math.Max(0.0, global::System.Math.Min(global::System.Math.Min(0.5 * (1.0 + theta), 2.0), 2.0 * theta));",
+            KernelLimiter.Superbee => "double phi = global::System.Math.Max(0.0, global::System.Math.Max(global::System.Math.Min(1.0, 2.0 * theta), global::System.Math.Min(2.0, theta)));",
+            _ => "double phi = global::System.Math.Max(0.0, global::System.Math.Min(1.0, theta));",
+        });
+        w.Line("return phi * backward;");
+        w.Close();
+    }
+
+    /// <summary>
+    /// Writes <c>leftFace</c> and <c>rightFace</c> for the face between <paramref name="left"/> and
+    /// <paramref name="right"/>, whose indices along the face direction are <paramref name="leftAlong"/>
+    /// and <paramref name="rightAlong"/>.
+    /// </summary>
+    public static void FaceStates(
+        IndentedWriter w, ResidualKernelModel model, string axis, string count, string stride, string left, string right, string leftAlong, string rightAlong)
+    {
+        string s = model.State.FullyQualifiedName;
+        w.Line("int leftLeft = " + leftAlong + " >= 1 ? " + left + " - " + stride + " : " + axis + "Periodic ? " + left + " + (" + count + " - 1) * " + stride + " : -1;");
+        w.Line("int rightRight = " + rightAlong + " <= " + count + " - 2 ? " + right + " + " + stride + " : " + axis + "Periodic ? " + right + " - (" + count + " - 1) * " + stride + " : -1;");
+        w.Line("ref readonly " + s + " uL = ref state[" + left + "];");
+        w.Line("ref readonly " + s + " uR = ref state[" + right + "];");
+        w.Line(s + " leftFace = uL;");
+        w.Line(s + " rightFace = uR;");
+        w.Line("if (leftLeft >= 0)");
+        w.Open();
+        w.Line("ref readonly " + s + " uLL = ref state[leftLeft];");
+        foreach (var c in model.State.Components)
+        {
+            w.Line("leftFace." + c.Access + " += 0.5 * LimitedSlope(uL." + c.Access + " - uLL." + c.Access + ", uR." + c.Access + " - uL." + c.Access + ");");
+        }
+
+        w.Close();
+        w.Line("if (rightRight >= 0)");
+        w.Open();
+        w.Line("ref readonly " + s + " uRR = ref state[rightRight];");
+        foreach (var c in model.State.Components)
+        {
+            w.Line("rightFace." + c.Access + " -= 0.5 * LimitedSlope(uR." + c.Access + " - uL." + c.Access + ", uRR." + c.Access + " - uR." + c.Access + ");");
+        }
+
+        w.Close();
+    }
+}

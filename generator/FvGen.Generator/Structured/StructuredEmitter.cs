@@ -1,0 +1,236 @@
+using System;
+using System.Collections.Generic;
+using FvGen.Generator.Common;
+using FvGen.Generator.Kernels;
+
+namespace FvGen.Generator.Structured;
+
+/// <summary>
+/// Writes the face loops of a kernel on a structured grid: for each direction, the interior faces,
+/// then either the periodic wrap faces or the two sides' boundary faces.
+/// </summary>
+/// <remarks>
+/// Cells are numbered x fastest, <c>c = i + nx * (j + ny * k)</c>; the face between cells
+/// <c>c - stride</c> and <c>c</c> along a direction has its normal along +that axis.
+/// </remarks>
+internal static class StructuredEmitter
+{
+    private static readonly string[] Axis = { "x", "y", "z" };
+    private static readonly string[] Index = { "i", "j", "k" };
+    private static readonly string[] Count = { "nx", "ny", "nz" };
+    private static readonly string[] Stride = { "1", "nx", "plane" };
+    private static readonly string[] Side = { "XLow", "XHigh", "YLow", "YHigh", "ZLow", "ZHigh" };
+
+    public static void Emit(IndentedWriter w, ResidualKernelModel model)
+    {
+        int dim = (int)model.Mesh;
+        var state = KernelNames.Find(model, ParameterRole.State)!;
+        var residual = KernelNames.Find(model, ParameterRole.Residual)!;
+        if (state.IsMemory)
+        {
+            w.Line("global::System.ReadOnlySpan<" + model.State.FullyQualifiedName + "> state = stateMemory.Span;");
+        }
+
+        if (residual.IsMemory)
+        {
+            w.Line("global::System.Span<" + model.State.FullyQualifiedName + "> residual = residualMemory.Span;");
+        }
+
+        for (int a = 0; a < dim; a++)
+        {
+            string ax = Axis[a];
+            w.Line("int " + Count[a] + " = mesh." + ax.ToUpperInvariant() + ".CellCount;");
+            w.Line("global::System.ReadOnlySpan<double> " + ax + "Nodes = mesh." + ax.ToUpperInvariant() + ".Nodes;");
+            w.Line("global::System.ReadOnlySpan<double> " + ax + "Centres = mesh." + ax.ToUpperInvariant() + ".Centres;");
+            w.Line("global::System.ReadOnlySpan<double> " + ax + "Widths = mesh." + ax.ToUpperInvariant() + ".Widths;");
+        }
+
+        if (dim == 3)
+        {
+            w.Line("int plane = nx * ny;");
+        }
+
+        w.Line("residual.Clear();");
+        if (model.Reconstruction == KernelReconstruction.Linear)
+        {
+            MusclEmitter.Declare(w, model, dim);
+        }
+
+        bool hasBoundaries = KernelNames.Find(model, ParameterRole.Boundaries) is not null;
+        for (int d = 0; d < dim; d++)
+        {
+            w.Line();
+            Interior(w, model, dim, d);
+            w.Line();
+            w.Open("if (mesh.IsPeriodic(" + d + "))");
+            Periodic(w, model, dim, d);
+            w.Close();
+            if (hasBoundaries)
+            {
+                w.Open("else");
+                BoundarySide(w, model, dim, d, high: false);
+                w.Line();
+                BoundarySide(w, model, dim, d, high: true);
+                w.Close();
+            }
+        }
+
+        w.Line();
+        w.Line("// Residual = -(1/V) Σ flux·area out of each cell.");
+        KernelEmitter.DivideByVolumes(w, "residual", "0", "residual.Length");
+    }
+
+    private static void Interior(IndentedWriter w, ResidualKernelModel model, int dim, int d)
+    {
+        w.Line("// " + Axis[d] + " faces between cells (" + Index[d] + " - 1) and " + Index[d] + " along " + Axis[d] + ": interior faces, normal +" + Axis[d] + ".");
+        Nest(w, dim, d, fixedIndex: null, body =>
+        {
+            body.Line("int right = " + CellIndex(dim) + ";");
+            body.Line("int left = right - " + Stride[d] + ";");
+            body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, "1.0") + ", area, " + Centroid(dim, d, Index[d]) + ", "
+                + Axis[d] + "Centres[" + Index[d] + "] - " + Axis[d] + "Centres[" + Index[d] + " - 1]);");
+            FaceFlux(body, model, d, "left", "right", Index[d] + " - 1", Index[d]);
+            body.Line("residual[left] -= flux;");
+            body.Line("residual[right] += flux;");
+        });
+    }
+
+    private static void Periodic(IndentedWriter w, ResidualKernelModel model, int dim, int d)
+    {
+        w.Line("// " + Axis[d] + " periodic faces: the last cell along " + Axis[d] + " (left) wraps to the first (right).");
+        Nest(w, dim, d, fixedIndex: "0", body =>
+        {
+            body.Line("int right = " + CellIndex(dim) + ";");
+            body.Line("int left = right + (" + Count[d] + " - 1) * " + Stride[d] + ";");
+            body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, "1.0") + ", area, " + Centroid(dim, d, "0") + ", 0.5 * ("
+                + Axis[d] + "Widths[" + Count[d] + " - 1] + " + Axis[d] + "Widths[0]));");
+            FaceFlux(body, model, d, "left", "right", Count[d] + " - 1", "0");
+            body.Line("residual[left] -= flux;");
+            body.Line("residual[right] += flux;");
+        });
+    }
+
+    private static void BoundarySide(IndentedWriter w, ResidualKernelModel model, int dim, int d, bool high)
+    {
+        string s = model.State.FullyQualifiedName;
+        string side = Side[2 * d + (high ? 1 : 0)];
+        string inside = high ? Count[d] + " - 1" : "0";
+        string node = high ? Count[d] : "0";
+        w.Line("// " + side + " side: boundary faces, normal " + (high ? "+" : "-") + Axis[d] + " out of the domain.");
+        w.Open();
+        w.Line("int patch = mesh.PatchIndex(global::FvGen.Meshes.Structured.GridSide." + side + ");");
+        w.Line(s + " total = default;");
+        KernelEmitter.PatchSwitch(w, model, "patch", (sw, entry) =>
+        {
+            Nest(sw, dim, d, fixedIndex: inside, body =>
+            {
+                body.Line("int inside = " + CellIndex(dim) + ";");
+                body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, high ? "1.0" : "-1.0") + ", area, " + Centroid(dim, d, node) + ", 0.5 * "
+                    + Axis[d] + "Widths[" + Index[d] + "]);");
+                body.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, "state[inside]", "face") + " * area;");
+                body.Line("residual[inside] -= flux;");
+                body.Line("total += flux;");
+            });
+        });
+        KernelEmitter.TallyAdd(w, model, "patch");
+        w.Close();
+    }
+
+    private static void FaceFlux(IndentedWriter w, ResidualKernelModel model, int d, string left, string right, string leftAlong, string rightAlong)
+    {
+        string s = model.State.FullyQualifiedName;
+        if (model.Reconstruction == KernelReconstruction.Linear)
+        {
+            MusclEmitter.FaceStates(w, model, Axis[d], Count[d], Stride[d], left, right, leftAlong, rightAlong);
+            w.Line(s + " flux = " + KernelEmitter.FluxCall(model, "leftFace", "rightFace", "face") + " * area;");
+        }
+        else
+        {
+            w.Line(s + " flux = " + KernelEmitter.FluxCall(model, "state[" + left + "]", "state[" + right + "]", "face") + " * area;");
+        }
+    }
+
+    /// <summary>
+    /// Writes the loops over the cells of a face set, x innermost. Along direction <paramref name="d"/> the index
+    /// runs from 1 (interior faces) or is fixed to <paramref name="fixedIndex"/> (one layer of faces).
+    /// The face area is written as soon as the indices it needs are known.
+    /// </summary>
+    private static void Nest(IndentedWriter w, int dim, int d, string? fixedIndex, Action<IndentedWriter> body)
+    {
+        var areaAxes = new List<int>();
+        for (int a = 0; a < dim; a++)
+        {
+            if (a != d)
+            {
+                areaAxes.Add(a);
+            }
+        }
+
+        string area = areaAxes.Count == 0 ? "1.0" : string.Join(" * ", areaAxes.ConvertAll(a => Axis[a] + "Widths[" + Index[a] + "]"));
+        var bound = new HashSet<int>();
+        bool areaWritten = false;
+        // Each face set in a block of its own, so its locals never meet another set's.
+        w.Open();
+        int opened = 1;
+        if (fixedIndex is not null)
+        {
+            w.Line("int " + Index[d] + " = " + fixedIndex + ";");
+            bound.Add(d);
+        }
+
+        void WriteAreaIfReady()
+        {
+            if (!areaWritten && areaAxes.TrueForAll(bound.Contains))
+            {
+                w.Line("double area = " + area + ";");
+                areaWritten = true;
+            }
+        }
+
+        WriteAreaIfReady();
+        for (int a = dim - 1; a >= 0; a--)
+        {
+            if (bound.Contains(a))
+            {
+                continue;
+            }
+
+            string start = a == d ? "1" : "0";
+            w.Open("for (int " + Index[a] + " = " + start + "; " + Index[a] + " < " + Count[a] + "; " + Index[a] + "++)");
+            opened++;
+            bound.Add(a);
+            WriteAreaIfReady();
+        }
+
+        body(w);
+        for (int n = 0; n < opened; n++)
+        {
+            w.Close();
+        }
+    }
+
+    private static string CellIndex(int dim) => dim switch
+    {
+        1 => "i",
+        2 => "i + nx * j",
+        _ => "i + nx * (j + ny * k)",
+    };
+
+    private static string Normal(int d, string sign)
+    {
+        var parts = new[] { "0.0", "0.0", "0.0" };
+        parts[d] = sign;
+        return "new global::FvGen.Geometry.Vec3(" + string.Join(", ", parts) + ")";
+    }
+
+    private static string Centroid(int dim, int d, string node)
+    {
+        var parts = new string[3];
+        for (int a = 0; a < 3; a++)
+        {
+            parts[a] = a >= dim ? "0.0" : a == d ? Axis[a] + "Nodes[" + node + "]" : Axis[a] + "Centres[" + Index[a] + "]";
+        }
+
+        return "new global::FvGen.Geometry.Vec3(" + string.Join(", ", parts) + ")";
+    }
+}

@@ -1,0 +1,65 @@
+using FvGen;
+using FvGen.Boundaries;
+using FvGen.Geometry;
+using FvGen.Ledger;
+using FvGen.Meshes.Structured;
+using FvGen.Meshes.Unstructured;
+
+namespace FvGen.Generator.Tests.Kernels;
+
+/// <summary>Linear advection u_t + ∇·(a u) = 0 with a constant velocity a, upwind fluxes.</summary>
+public static partial class Advection
+{
+    /// <summary>The advection velocity.</summary>
+    public static readonly Vec3 Velocity = new(1.0, 0.5, 0.25);
+
+    /// <summary>The value carried in through inflow patches.</summary>
+    public const double InflowValue = 0.75;
+
+    /// <summary>Upwind flux: a·n times the upwind state (common practice; LeVeque 2002, ch. 4).</summary>
+    [NumericalFlux(Antisymmetric = true)]
+    public static Scalar Upwind(in Scalar left, in Scalar right, in FaceGeometry face)
+    {
+        double an = Vec3.Dot(Velocity, face.Normal);
+        return new Scalar(an * (an >= 0 ? left.Value : right.Value));
+    }
+
+    /// <summary>Upwind boundary: the inside state leaves, the fixed inflow value enters.</summary>
+    [BoundaryFlux(BoundaryKind.Inflow)]
+    public static Scalar Open(in Scalar inside, in FaceGeometry face)
+    {
+        double an = Vec3.Dot(Velocity, face.Normal);
+        return new Scalar(an * (an >= 0 ? inside.Value : InflowValue));
+    }
+
+    /// <summary>No flux through a wall.</summary>
+    [BoundaryFlux(BoundaryKind.Wall)]
+    public static Scalar Wall(in Scalar inside, in FaceGeometry face) => default;
+
+    [ResidualKernel(nameof(Upwind))]
+    public static partial void Residual1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind))]
+    public static partial void Residual2D(StructuredGrid2D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind))]
+    public static partial void Residual3D(StructuredGrid3D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind))]
+    public static partial void ResidualUnstructured(UnstructuredMesh mesh, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.Minmod)]
+    public static partial void MusclMinmod1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.VanLeer)]
+    public static partial void MusclVanLeer1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral)]
+    public static partial void MusclMC1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.Superbee)]
+    public static partial void MusclSuperbee1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.VanLeer)]
+    public static partial void MusclVanLeer3D(StructuredGrid3D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+}
