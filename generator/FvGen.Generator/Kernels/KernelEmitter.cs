@@ -82,7 +82,7 @@ internal static class KernelEmitter
         var tally = KernelNames.Find(model, ParameterRole.Tally);
         var buffer = KernelNames.Find(model, ParameterRole.FaceBuffer);
         string s = model.State.FullyQualifiedName;
-        string kernel = SourceLiteral.String(model.MethodName);
+        string kernel = model.MethodName; // an identifier: safe inside a string literal
 
         w.Line("global::System.ArgumentNullException.ThrowIfNull(mesh, " + SourceLiteral.String(mesh.Name) + ");");
         w.Line("int cellCount = mesh.CellCount;");
@@ -92,7 +92,7 @@ internal static class KernelEmitter
         {
             w.Line("if (faceFluxMemory.Length < mesh.FaceCount)");
             w.Open();
-            w.Line("throw new global::System.ArgumentException(" + kernel + " + \": the face buffer holds \" + faceFluxMemory.Length + \" faces; the mesh has \" + mesh.FaceCount + \".\", " + SourceLiteral.String(buffer.Name) + ");");
+            w.Line("throw new global::System.ArgumentException(\"" + kernel + ": the face buffer holds \" + faceFluxMemory.Length + \" faces; the mesh has \" + mesh.FaceCount + \".\", " + SourceLiteral.String(buffer.Name) + ");");
             w.Close();
         }
 
@@ -106,7 +106,7 @@ internal static class KernelEmitter
         {
             w.Line("if (mesh.PatchNames.Count != 0)");
             w.Open();
-            w.Line("throw new global::System.ArgumentException(" + kernel + " + \" has no boundary binding parameter, so it runs only on meshes without boundary patches; this mesh has \" + mesh.PatchNames.Count + \".\", " + SourceLiteral.String(mesh.Name) + ");");
+            w.Line("throw new global::System.ArgumentException(\"" + kernel + " has no boundary binding parameter, so it runs only on meshes without boundary patches; this mesh has \" + mesh.PatchNames.Count + \".\", " + SourceLiteral.String(mesh.Name) + ");");
             w.Close();
         }
 
@@ -114,7 +114,7 @@ internal static class KernelEmitter
         {
             w.Line("if (tally is not null && (tally.PatchCount != mesh.PatchNames.Count || tally.ComponentCount != " + s + ".ComponentCount))");
             w.Open();
-            w.Line("throw new global::System.ArgumentException(" + kernel + " + \": the tally has \" + tally.PatchCount + \" patches of \" + tally.ComponentCount + \" components; the mesh has \" + mesh.PatchNames.Count + \" patches and the state \" + " + s + ".ComponentCount + \" components.\", " + SourceLiteral.String(tally.Name) + ");");
+            w.Line("throw new global::System.ArgumentException(\"" + kernel + ": the tally has \" + tally.PatchCount + \" patches of \" + tally.ComponentCount + \" components; the mesh has \" + mesh.PatchNames.Count + \" patches and the state \" + " + s + ".ComponentCount + \" components.\", " + SourceLiteral.String(tally.Name) + ");");
             w.Close();
         }
 
@@ -125,7 +125,7 @@ internal static class KernelEmitter
     {
         w.Line("if (" + actual + " != " + expected + ")");
         w.Open();
-        w.Line("throw new global::System.ArgumentException(" + kernel + " + \": '" + name + "' holds \" + " + actual + " + \" " + what + "; the mesh has \" + " + expected + " + \".\", " + SourceLiteral.String(name) + ");");
+        w.Line("throw new global::System.ArgumentException(\"" + kernel + ": '" + name + "' holds \" + " + actual + " + \" " + what + "; the mesh has \" + " + expected + " + \".\", " + SourceLiteral.String(name) + ");");
         w.Close();
     }
 

@@ -1,0 +1,106 @@
+namespace FvGen.Generator.Tests.Support;
+
+/// <summary>Small user sources of the kind a CFD engineer writes, shared by the generator-driver tests.</summary>
+internal static class Samples
+{
+    public const string State = """
+        using FvGen;
+
+        namespace Demo;
+
+        public struct Pair
+        {
+            public double X;
+            public double Y;
+        }
+
+        [ConservedState]
+        public partial struct Flow
+        {
+            public double Density;
+            public Pair Momentum;
+        }
+        """;
+
+    public const string Scalar = """
+        using FvGen;
+
+        namespace Demo;
+
+        [ConservedState]
+        public partial struct Heat
+        {
+            public double Energy;
+        }
+        """;
+
+    public const string Conduction1D = """
+        using System;
+        using FvGen;
+        using FvGen.Boundaries;
+        using FvGen.Geometry;
+        using FvGen.Ledger;
+        using FvGen.Meshes.Structured;
+
+        namespace Demo;
+
+        public static partial class Conduction
+        {
+            public const double Conductivity = 0.5;
+
+            [NumericalFlux(Antisymmetric = true)]
+            public static Heat TwoPoint(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = -Conductivity * (right.Energy - left.Energy) / face.CentreDistance };
+
+            [BoundaryFlux(BoundaryKind.Wall)]
+            public static Heat Insulated(in Heat inside, in FaceGeometry face) => default;
+
+            [ResidualKernel(nameof(TwoPoint))]
+            public static partial void Residual(StructuredGrid1D grid, ReadOnlySpan<Heat> temperature, Span<Heat> rate, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+        }
+        """;
+
+    public const string ConductionUnstructured = """
+        using System;
+        using System.Threading.Tasks;
+        using FvGen;
+        using FvGen.Boundaries;
+        using FvGen.Geometry;
+        using FvGen.Meshes.Unstructured;
+
+        namespace Demo;
+
+        public static partial class Spreading
+        {
+            [NumericalFlux]
+            public static Heat TwoPoint(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = -(right.Energy - left.Energy) / face.CentreDistance };
+
+            [BoundaryFlux(BoundaryKind.Wall)]
+            public static Heat Insulated(in Heat inside, in FaceGeometry face) => default;
+
+            [ResidualKernel(nameof(TwoPoint), Mode = ExecutionMode.ParallelGather)]
+            internal static partial void Residual(UnstructuredMesh mesh, ReadOnlyMemory<Heat> state, Memory<Heat> rate, [FaceData] Memory<Heat> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);
+        }
+        """;
+
+    /// <summary>A second, independent kernel in a file of its own (for caching tests).</summary>
+    public const string Other = """
+        using System;
+        using FvGen;
+        using FvGen.Geometry;
+        using FvGen.Meshes.Structured;
+
+        namespace Demo;
+
+        public static partial class Drift
+        {
+            [NumericalFlux]
+            public static Heat Upwind(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = face.Normal.X * left.Energy };
+
+            [ResidualKernel(nameof(Upwind))]
+            public static partial void Residual(StructuredGrid2D grid, ReadOnlySpan<Heat> state, Span<Heat> rate);
+        }
+        """;
+}
