@@ -41,7 +41,19 @@ internal static class GeneratorHarness
     public static async Task<ImmutableArray<Diagnostic>> AnalyzeAsync(Compilation withGenerated)
     {
         var analyzers = ImmutableArray.Create<DiagnosticAnalyzer>(new FvGenUsageAnalyzer());
-        return await withGenerated.WithAnalyzers(analyzers).GetAnalyzerDiagnosticsAsync();
+        Exception? thrown = null;
+        var options = new CompilationWithAnalyzersOptions(
+            new AnalyzerOptions([]),
+            onAnalyzerException: (exception, _, _) => thrown ??= exception,
+            concurrentAnalysis: false,
+            logAnalyzerExecutionTime: false);
+        var diagnostics = await withGenerated.WithAnalyzers(analyzers, options).GetAnalyzerDiagnosticsAsync();
+        if (thrown is not null)
+        {
+            throw new InvalidOperationException("The usage analyzer threw.", thrown);
+        }
+
+        return diagnostics;
     }
 
     /// <summary>Compiler errors of the compilation (after generation), as readable lines.</summary>
