@@ -25,9 +25,9 @@ internal static class FluxSignature
         {
             why = "it is generic";
         }
-        else if (parameters.Length != 3)
+        else if (parameters.Length != 3 && parameters.Length != 5)
         {
-            why = "it takes " + parameters.Length + " parameter(s), not 3";
+            why = "it takes " + parameters.Length + " parameter(s), not 3 (or 5 with the two cells' gradients)";
         }
         else if (!ConservedStateParser.IsConservedState(method.ReturnType))
         {
@@ -50,6 +50,12 @@ internal static class FluxSignature
         {
             why = "the left and right states must be passed the same way";
         }
+        else if (parameters.Length == 5
+            && (!IsGradientOf(parameters[3].Type, method.ReturnType) || !IsGradientOf(parameters[4].Type, method.ReturnType)
+                || !ByValueOrIn(parameters[3]) || parameters[3].RefKind != parameters[4].RefKind))
+        {
+            why = "the fourth and fifth parameters must be the left and right cells' FvGen.Geometry.Gradient<" + method.ReturnType.Name + ">, passed the same way";
+        }
 
         if (why is not null)
         {
@@ -57,7 +63,8 @@ internal static class FluxSignature
             return null;
         }
 
-        return (new FluxCall(method.Name, Modifier(parameters[0]), Modifier(parameters[2])), method.ReturnType);
+        string? gradients = parameters.Length == 5 ? Modifier(parameters[3]) : null;
+        return (new FluxCall(method.Name, Modifier(parameters[0]), Modifier(parameters[2]), gradients), method.ReturnType);
     }
 
     /// <summary>Checks <c>static TState B(in TState inside, in FaceGeometry face)</c> and its kind.</summary>
@@ -122,6 +129,12 @@ internal static class FluxSignature
 
         return value >= 0 && value < Kinds.Length ? Kinds[value] : null;
     }
+
+    /// <summary>True when <paramref name="type"/> is <c>FvGen.Geometry.Gradient&lt;state&gt;</c>.</summary>
+    public static bool IsGradientOf(ITypeSymbol type, ITypeSymbol state) =>
+        type is INamedTypeSymbol { IsGenericType: true } named
+        && named.OriginalDefinition.ToDisplayString() == KnownNames.GradientOpen
+        && SymbolEqualityComparer.Default.Equals(named.TypeArguments[0], state);
 
     private static bool ByValueOrIn(IParameterSymbol p) => p.RefKind is RefKind.None or RefKind.In;
 

@@ -27,7 +27,14 @@ internal static class KernelEmitter
             MeshKind.Structured3D => "StructuredGrid3D",
             _ => "UnstructuredMesh",
         };
-        string order = model.Reconstruction == KernelReconstruction.Linear ? "MUSCL, " + model.Limiter + " limiter" : "first order";
+        string order = model.Reconstruction != KernelReconstruction.Linear ? "first order"
+            : model.Mesh == MeshKind.Unstructured ? "linear reconstruction, Green-Gauss gradients, Barth-Jespersen limiter"
+            : "MUSCL, " + model.Limiter + " limiter";
+        if (model.Flux.TakesGradients)
+        {
+            order += ", Green-Gauss gradients to the flux";
+        }
+
         return "residual kernel " + model.MethodName + " (numerical flux " + model.Flux.Name + ", " + mesh + ", " + model.Mode + ", " + order + ")";
     }
 
@@ -144,8 +151,16 @@ internal static class KernelEmitter
     }
 
     /// <summary>The call of the numerical flux with the modifiers of its signature.</summary>
-    public static string FluxCall(ResidualKernelModel model, string left, string right, string face) =>
-        model.TypeName + "." + model.Flux.Name + "(" + model.Flux.StateModifier + left + ", " + model.Flux.StateModifier + right + ", " + model.Flux.FaceModifier + face + ")";
+    public static string FluxCall(ResidualKernelModel model, string left, string right, string face)
+    {
+        string call = model.TypeName + "." + model.Flux.Name + "(" + model.Flux.StateModifier + left + ", " + model.Flux.StateModifier + right + ", " + model.Flux.FaceModifier + face;
+        if (model.Flux.TakesGradients)
+        {
+            call += ", " + model.Flux.GradientModifier + "gradients[left], " + model.Flux.GradientModifier + "gradients[right]";
+        }
+
+        return call + ")";
+    }
 
     /// <summary>The call of one boundary flux.</summary>
     public static string BoundaryCall(ResidualKernelModel model, Fluxes.BoundaryFluxEntry entry, string inside, string face) =>

@@ -19,6 +19,7 @@ internal static class KernelNames
         ParameterRole.Boundaries => "boundaries",
         ParameterRole.Tally => "tally",
         ParameterRole.ParallelOptions => "options",
+        ParameterRole.GradientBuffer => p.IsMemory ? "gradientMemory" : "gradients",
         _ => "faceFluxMemory",
     };
 

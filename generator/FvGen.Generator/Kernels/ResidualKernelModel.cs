@@ -35,7 +35,11 @@ internal sealed record ResidualKernelModel(
     EquatableArray<BoundaryFluxEntry> BoundaryFluxes,
     KernelMode Mode,
     KernelReconstruction Reconstruction,
-    KernelLimiter Limiter);
+    KernelLimiter Limiter)
+{
+    /// <summary>True when the kernel computes Green–Gauss cell gradients first (linear reconstruction or a diffusion flux on an unstructured mesh).</summary>
+    public bool NeedsGradients => Mesh == MeshKind.Unstructured && (Reconstruction == KernelReconstruction.Linear || Flux.TakesGradients);
+}
 
 /// <summary>One parameter of a kernel.</summary>
 /// <param name="Name">The name as declared.</param>
@@ -64,6 +68,7 @@ internal enum ParameterRole
     Tally,
     ParallelOptions,
     FaceBuffer,
+    GradientBuffer,
 }
 
 /// <summary>Mirror of <c>FvGen.ExecutionMode</c> (same values).</summary>

@@ -199,7 +199,9 @@ internal static class ResidualKernelParser
         // Mode and reconstruction.
         var mode = (KernelMode)NamedInt(attribute, "Mode", 0);
         var reconstruction = (KernelReconstruction)NamedInt(attribute, "Reconstruction", 0);
-        var limiter = (KernelLimiter)NamedInt(attribute, "Limiter", 0);
+        // The attribute's default limiter (minmod) is a MUSCL limiter; on an unstructured mesh an
+        // unspecified limiter means Barth–Jespersen, the only one generated there.
+        var limiter = (KernelLimiter)NamedInt(attribute, "Limiter", mesh == MeshKind.Unstructured ? (int)KernelLimiter.BarthJespersen : 0);
         string? modeProblem = CheckMode(mode, mesh.Value, parameters);
         if (modeProblem is not null)
         {
@@ -207,10 +209,27 @@ internal static class ResidualKernelParser
             return null;
         }
 
-        string? reconstructionProblem = CheckReconstruction(reconstruction, limiter, mesh.Value, mode);
+        string? reconstructionProblem = CheckReconstruction(reconstruction, limiter, mesh.Value, flux.Value.Call);
         if (reconstructionProblem is not null)
         {
             problems?.Add(new Problem(Descriptors.ReconstructionNotAvailable, location, method.Name, reconstructionProblem));
+            return null;
+        }
+
+        bool needsGradients = mesh.Value == MeshKind.Unstructured && (reconstruction == KernelReconstruction.Linear || flux.Value.Call.TakesGradients);
+        var gradientBuffer = parameters.FirstOrDefault(p => p.Role == ParameterRole.GradientBuffer);
+        string? gradientProblem = (needsGradients, gradientBuffer) switch
+        {
+            (true, null) => "it computes Green-Gauss cell gradients ("
+                + (reconstruction == KernelReconstruction.Linear ? "linear reconstruction" : "its flux takes gradients")
+                + "), so it needs a gradient buffer: add a 'Span<Gradient<" + stateSymbol.Name + ">>' parameter ('Memory<...>' in parallel modes) of one gradient per cell",
+            (false, not null) => "gradient buffer '" + gradientBuffer.Name + "' is used only by linear reconstruction or gradient-taking fluxes on unstructured meshes",
+            (true, { IsMemory: false }) when mode != KernelMode.SerialScatter => "in ExecutionMode." + mode + " the gradient buffer '" + gradientBuffer!.Name + "' must be a Memory<Gradient<" + stateSymbol.Name + ">>",
+            _ => null,
+        };
+        if (gradientProblem is not null)
+        {
+            problems?.Add(new Problem(Descriptors.KernelParameters, location, method.Name, gradientProblem));
             return null;
         }
 
@@ -287,6 +306,17 @@ internal static class ResidualKernelParser
             case "System.Span<T>":
             case "System.Memory<T>":
                 var element = named.TypeArguments[0];
+                bool readOnlyContainer = original.StartsWith("System.ReadOnly", StringComparison.Ordinal);
+                bool memoryContainer = original.EndsWith("Memory<T>", StringComparison.Ordinal);
+                if (element is INamedTypeSymbol { IsGenericType: true } gradient
+                    && gradient.OriginalDefinition.ToDisplayString() == KnownNames.GradientOpen
+                    && ConservedStateParser.IsConservedState(gradient.TypeArguments[0]))
+                {
+                    return readOnlyContainer
+                        ? (default, null, null, false, "gradient buffer '" + p.Name + "' must be writable (Span or Memory)")
+                        : (ParameterRole.GradientBuffer, gradient.TypeArguments[0], null, memoryContainer, null);
+                }
+
                 if (!ConservedStateParser.IsConservedState(element))
                 {
                     return (default, null, null, false, "parameter '" + p.Name + "' holds " + element.ToDisplayString() + ", which is not a [ConservedState] struct");
@@ -321,7 +351,7 @@ internal static class ResidualKernelParser
     private static string Unknown(IParameterSymbol p) =>
         "parameter '" + p.Name + "' of type " + p.Type.ToDisplayString()
         + " is none of: a mesh (StructuredGrid1D/2D/3D, UnstructuredMesh), the state (ReadOnlySpan or ReadOnlyMemory of the state), the residual (Span or Memory), "
-        + "a [FaceData] face buffer, a BoundaryBinding<Boundary>, a BoundaryFluxTally, ParallelOptions";
+        + "a [FaceData] face buffer, a gradient buffer (Span or Memory of Gradient<TState>), a BoundaryBinding<Boundary>, a BoundaryFluxTally, ParallelOptions";
 
     private static string TypeText(IParameterSymbol p, ParameterRole role, ITypeSymbol? element, string kernelType)
     {
@@ -335,7 +365,13 @@ internal static class ResidualKernelParser
         {
             string container = named.OriginalDefinition.ToDisplayString();
             container = container.Substring(0, container.Length - "<T>".Length);
-            return "global::" + container + "<" + element.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat) + ">";
+            string item = element.ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat);
+            if (role == ParameterRole.GradientBuffer)
+            {
+                item = "global::FvGen.Geometry.Gradient<" + item + ">";
+            }
+
+            return "global::" + container + "<" + item + ">";
         }
 
         return p.Type.WithNullableAnnotation(NullableAnnotation.NotAnnotated).ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat) + nullable;
@@ -377,8 +413,13 @@ internal static class ResidualKernelParser
         return null;
     }
 
-    private static string? CheckReconstruction(KernelReconstruction reconstruction, KernelLimiter limiter, MeshKind mesh, KernelMode mode)
+    private static string? CheckReconstruction(KernelReconstruction reconstruction, KernelLimiter limiter, MeshKind mesh, FluxCall flux)
     {
+        if (flux.TakesGradients && mesh != MeshKind.Unstructured)
+        {
+            return "numerical flux '" + flux.Name + "' takes cell gradients, which this version generates on unstructured meshes only; on structured grids use the two-point difference over face.CentreDistance";
+        }
+
         if (!Enum.IsDefined(typeof(KernelReconstruction), reconstruction))
         {
             return "reconstruction " + (int)reconstruction + " is not a member of FvGen.ReconstructionKind";
@@ -393,8 +434,10 @@ internal static class ResidualKernelParser
         {
             KernelReconstruction.FirstOrder => null,
             KernelReconstruction.User => "ReconstructionKind.User is not generated by this version of FvGen; use FirstOrder or Linear",
-            _ when mesh == MeshKind.Unstructured => "ReconstructionKind.Linear (Green-Gauss gradients with Barth-Jespersen) is not generated for unstructured meshes by this version of FvGen; use FirstOrder there",
-            _ when limiter == KernelLimiter.BarthJespersen => "the Barth-Jespersen limiter is for unstructured meshes; MUSCL on structured grids takes Minmod, VanLeer, MonotonizedCentral or Superbee",
+            _ when mesh == MeshKind.Unstructured && limiter != KernelLimiter.BarthJespersen =>
+                "linear reconstruction on unstructured meshes is limited by Barth-Jespersen; the " + limiter + " limiter is for MUSCL on structured grids",
+            _ when mesh != MeshKind.Unstructured && limiter == KernelLimiter.BarthJespersen =>
+                "the Barth-Jespersen limiter is for unstructured meshes; MUSCL on structured grids takes Minmod, VanLeer, MonotonizedCentral or Superbee",
             _ => null,
         };
     }
@@ -440,6 +483,7 @@ internal static class ResidualKernelParser
         ParameterRole.Boundaries => "boundary binding",
         ParameterRole.Tally => "boundary flux tally",
         ParameterRole.ParallelOptions => "ParallelOptions",
+        ParameterRole.GradientBuffer => "gradient buffer",
         _ => "face buffer",
     };
 

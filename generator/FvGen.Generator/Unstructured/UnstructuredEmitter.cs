@@ -56,7 +56,20 @@ internal static class UnstructuredEmitter
             w.Line("global::System.Span<" + s + "> residual = residualMemory.Span;");
         }
 
-        FaceArrays(w);
+        if (KernelNames.Find(model, ParameterRole.GradientBuffer) is { IsMemory: true })
+        {
+            w.Line("global::System.Span<" + GradientEmitter.GradientType(model) + "> gradients = gradientMemory.Span;");
+        }
+
+        if (model.NeedsGradients)
+        {
+            GradientEmitter.Emit(w, model, parallel: false);
+            w.Line();
+        }
+
+        // The face loops in a block of their own, apart from the locals of the gradient pass.
+        w.Open();
+        FaceArrays(w, model, declareGradients: false);
         w.Line("residual.Clear();");
         w.Line();
         w.Line("// Interior faces [0, InteriorFaceCount): left -> right, serial scatter.");
@@ -75,11 +88,18 @@ internal static class UnstructuredEmitter
         w.Line();
         w.Line("// Residual = -(1/V) Σ flux·area out of each cell.");
         KernelEmitter.DivideByVolumes(w, "residual", "0", "residual.Length");
+        w.Close();
     }
 
     private static void Gather(IndentedWriter w, ResidualKernelModel model)
     {
         string s = model.State.FullyQualifiedName;
+        if (model.NeedsGradients)
+        {
+            GradientEmitter.Emit(w, model, parallel: true);
+            w.Line();
+        }
+
         w.Line("int interiorFaces = mesh.InteriorFaceCount;");
         w.Line("int faceChunks = (interiorFaces + " + ChunkSize + " - 1) / " + ChunkSize + ";");
         w.Line();
@@ -87,7 +107,7 @@ internal static class UnstructuredEmitter
         w.Open("global::System.Threading.Tasks.Parallel.For(0, faceChunks, options, chunk =>");
         w.Line("global::System.ReadOnlySpan<" + s + "> state = stateMemory.Span;");
         w.Line("global::System.Span<" + s + "> faceFlux = faceFluxMemory.Span;");
-        FaceArrays(w);
+        FaceArrays(w, model, declareGradients: true);
         w.Line("int end = global::System.Math.Min(interiorFaces, (chunk + 1) * " + ChunkSize + ");");
         w.Open("for (int f = chunk * " + ChunkSize + "; f < end; f++)");
         w.Line("int left = faceLeft[f];");
@@ -101,7 +121,7 @@ internal static class UnstructuredEmitter
         w.Open();
         w.Line("global::System.ReadOnlySpan<" + s + "> state = stateMemory.Span;");
         w.Line("global::System.Span<" + s + "> faceFlux = faceFluxMemory.Span;");
-        FaceArrays(w);
+        FaceArrays(w, model, declareGradients: true);
         Patches(w, model, (body, entry) => body.Line("faceFlux[f] = flux;"));
         w.Close();
         w.Line();
@@ -135,6 +155,12 @@ internal static class UnstructuredEmitter
     private static void ColouredScatter(IndentedWriter w, ResidualKernelModel model)
     {
         string s = model.State.FullyQualifiedName;
+        if (model.NeedsGradients)
+        {
+            GradientEmitter.Emit(w, model, parallel: true);
+            w.Line();
+        }
+
         w.Line("residualMemory.Span.Clear();");
         w.Line("global::FvGen.Meshes.Unstructured.FaceColouring colouring = mesh.FaceColouring;");
         w.Line();
@@ -147,7 +173,7 @@ internal static class UnstructuredEmitter
         w.Line("global::System.ReadOnlySpan<" + s + "> state = stateMemory.Span;");
         w.Line("global::System.Span<" + s + "> residual = residualMemory.Span;");
         w.Line("global::System.ReadOnlySpan<int> colourFaces = colouring.Faces;");
-        FaceArrays(w);
+        FaceArrays(w, model, declareGradients: true);
         w.Line("int end = global::System.Math.Min(last, first + (chunk + 1) * " + ChunkSize + ");");
         w.Open("for (int n = first + chunk * " + ChunkSize + "; n < end; n++)");
         w.Line("int f = colourFaces[n];");
@@ -163,7 +189,7 @@ internal static class UnstructuredEmitter
         w.Open();
         w.Line("global::System.ReadOnlySpan<" + s + "> state = stateMemory.Span;");
         w.Line("global::System.Span<" + s + "> residual = residualMemory.Span;");
-        FaceArrays(w);
+        FaceArrays(w, model, declareGradients: true);
         Patches(w, model, (body, entry) => body.Line("residual[inside] -= flux;"));
         w.Line();
         w.Line("// Residual = -(1/V) Σ flux·area out of each cell.");
@@ -171,8 +197,18 @@ internal static class UnstructuredEmitter
         w.Close();
     }
 
-    private static void FaceArrays(IndentedWriter w)
+    private static void FaceArrays(IndentedWriter w, ResidualKernelModel model, bool declareGradients)
     {
+        if (model.NeedsGradients)
+        {
+            if (declareGradients)
+            {
+                w.Line("global::System.ReadOnlySpan<" + GradientEmitter.GradientType(model) + "> gradients = gradientMemory.Span;");
+            }
+
+            w.Line("global::System.ReadOnlySpan<global::FvGen.Geometry.Vec3> cellCentroids = mesh.CellCentroids;");
+        }
+
         w.Line("global::System.ReadOnlySpan<int> faceLeft = mesh.FaceLeft;");
         w.Line("global::System.ReadOnlySpan<int> faceRight = mesh.FaceRight;");
         w.Line("global::System.ReadOnlySpan<global::FvGen.Geometry.Vec3> faceNormals = mesh.FaceNormals;");
@@ -184,7 +220,16 @@ internal static class UnstructuredEmitter
     private static void InteriorFlux(IndentedWriter w, ResidualKernelModel model, string name)
     {
         w.Line("var face = new global::FvGen.Geometry.FaceGeometry(faceNormals[f], faceAreas[f], faceCentroids[f], faceDistances[f]);");
-        w.Line(model.State.FullyQualifiedName + " " + name + " = " + KernelEmitter.FluxCall(model, "state[left]", "state[right]", "face") + " * faceAreas[f];");
+        string left = "state[left]", right = "state[right]";
+        if (model.Reconstruction == KernelReconstruction.Linear)
+        {
+            GradientEmitter.Reconstruct(w, model, "leftFace", "left");
+            GradientEmitter.Reconstruct(w, model, "rightFace", "right");
+            left = "leftFace";
+            right = "rightFace";
+        }
+
+        w.Line(model.State.FullyQualifiedName + " " + name + " = " + KernelEmitter.FluxCall(model, left, right, "face") + " * faceAreas[f];");
     }
 
     /// <summary>Writes the loop over patches: per patch a switch on its bound flux, each case a face loop ending in <paramref name="apply"/>.</summary>
@@ -208,7 +253,14 @@ internal static class UnstructuredEmitter
             sw.Open("for (int f = firstFace; f < endFace; f++)");
             sw.Line("int inside = faceLeft[f];");
             sw.Line("var face = new global::FvGen.Geometry.FaceGeometry(faceNormals[f], faceAreas[f], faceCentroids[f], faceDistances[f]);");
-            sw.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, "state[inside]", "face") + " * faceAreas[f];");
+            string inside = "state[inside]";
+            if (model.Reconstruction == KernelReconstruction.Linear)
+            {
+                GradientEmitter.Reconstruct(sw, model, "insideFace", "inside");
+                inside = "insideFace";
+            }
+
+            sw.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, inside, "face") + " * faceAreas[f];");
             apply(sw, entry);
             sw.Line("total += flux;");
             sw.Close();

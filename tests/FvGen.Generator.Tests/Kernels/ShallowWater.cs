@@ -88,6 +88,31 @@ public static partial class ShallowWater
         BoundaryFluxTally? tally,
         ParallelOptions options);
 
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear)]
+    public static partial void LinearSerial(
+        UnstructuredMesh mesh, ReadOnlySpan<WaterState> state, Span<WaterState> residual, Span<Gradient<WaterState>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.BarthJespersen, Mode = ExecutionMode.ParallelGather)]
+    public static partial void LinearGather(
+        UnstructuredMesh mesh,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        Memory<Gradient<WaterState>> gradients,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options);
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Mode = ExecutionMode.ParallelColouredScatter)]
+    public static partial void LinearColoured(
+        UnstructuredMesh mesh,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        Memory<Gradient<WaterState>> gradients,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options);
+
     [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelColouredScatter)]
     public static partial void Coloured(
         UnstructuredMesh mesh,

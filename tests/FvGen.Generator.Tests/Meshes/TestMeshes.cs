@@ -32,8 +32,8 @@ internal static class TestMeshes
         Prisms,
     }
 
-    /// <summary>An <paramref name="n"/> x <paramref name="n"/> lattice on the unit square, interior nodes moved at random by up to a quarter cell.</summary>
-    public static UnstructuredMesh Square(Kind2D kind, int n, int seed)
+    /// <summary>An <paramref name="n"/> x <paramref name="n"/> lattice on the unit square, interior nodes moved at random by up to <paramref name="jitter"/>/2 of a cell.</summary>
+    public static UnstructuredMesh Square(Kind2D kind, int n, int seed, double jitter = 0.5)
     {
         var random = new Random(seed);
         var points = new List<Vec3>();
@@ -44,8 +44,8 @@ internal static class TestMeshes
                 double x = (double)i / n, y = (double)j / n;
                 if (i > 0 && i < n && j > 0 && j < n)
                 {
-                    x += (random.NextDouble() - 0.5) * 0.5 / n;
-                    y += (random.NextDouble() - 0.5) * 0.5 / n;
+                    x += (random.NextDouble() - 0.5) * jitter / n;
+                    y += (random.NextDouble() - 0.5) * jitter / n;
                 }
 
                 points.Add(new Vec3(x, y, 0));
