@@ -103,6 +103,15 @@ public sealed class GmshReaderTests
         Assert.Equal(["1"], mesh.PatchNames);
     }
 
+    [Fact]
+    public void EntityInTwoPhysicalGroupsPutsItsFacesInTwoPatchesWhichIsRefused()
+    {
+        string text = File.ReadAllText(GmshTestFiles.Path("one-triangle.msh")).Replace("1 0 0 0 1 1 0 1 1 0", "1 0 0 0 1 1 0 2 1 5 0", StringComparison.Ordinal);
+        var ex = Assert.Throws<MeshValidationException>(() => GmshReader.Parse(text, "two-groups.msh"));
+        Assert.Equal(3, ex.Problems.Count);
+        Assert.Contains("boundary face 1 (element 1 on line 26) of patch '5' near (0.5, 0, 0) is in two patches, 'edge' and '5'", ex.Problems[0]);
+    }
+
     private static double PatchLength(UnstructuredMesh mesh, string name)
     {
         var patch = mesh.Patch(name);

@@ -131,6 +131,55 @@ public sealed class MeshValidationTests
     }
 
     [Fact]
+    public void LongProblemListsAreCutAfterTwentyWithTheRestCounted()
+    {
+        // A 6 x 6 lattice with no patches has 24 unpatched boundary edges.
+        var named = RectangleMesh.CreateBuilder(6, 6, 0, 1, 0, 1);
+        var builder = new UnstructuredMeshBuilder(2, "no patches");
+        for (int n = 0; n < named.NodeCount; n++)
+        {
+            builder.AddNode(named.GetNode(n));
+        }
+
+        for (int c = 0; c < named.CellCount; c++)
+        {
+            builder.AddCell(CellShape.Quadrilateral, named.NodesOf(c));
+        }
+
+        var ex = Assert.Throws<MeshValidationException>(builder.Build);
+        Assert.Equal(24, ex.Problems.Count);
+        Assert.All(ex.Problems, p => Assert.Contains("is in no patch", p));
+        Assert.EndsWith("\n  ... and 4 more.", ex.Message);
+        Assert.Equal(1 + 20 + 1, ex.Message.Split('\n').Length);
+    }
+
+    [Fact]
+    public void CellMissingAFaceIsReportedAsOpen()
+    {
+        // The builder's shapes always close; this feeds the validator a tetrahedron with one face left out,
+        // whose three remaining outward area vectors sum to minus the missing one (divergence theorem).
+        var builder = new UnstructuredMeshBuilder(3, "open tetrahedron");
+        builder.AddNode(0, 0, 0);
+        builder.AddNode(1, 0, 0);
+        builder.AddNode(0, 1, 0);
+        builder.AddNode(0, 0, 1);
+        builder.AddCell(CellShape.Tetrahedron, 0, 1, 2, 3);
+        var faces = new AssembledFaces
+        {
+            InteriorFaceCount = 0,
+            Left = [0, 0, 0],
+            Right = [-1, -1, -1],
+            NodeOffsets = [0, 3, 6, 9],
+            Nodes = [0, 2, 1, 0, 1, 3, 0, 3, 2],
+            Patches = [new BoundaryPatch("wall", 0, 0, 3)],
+            Problems = [],
+        };
+        var problems = MeshValidator.Check(builder, faces, MeshGeometry.Compute(builder, faces));
+        var problem = Assert.Single(problems);
+        Assert.StartsWith("cell 0 near (0.25, 0.25, 0.25) is not closed: its outward area vectors sum to (-0.5, -0.5, -0.5)", problem);
+    }
+
+    [Fact]
     public void BadInputIsRejectedWhereItIsGiven()
     {
         var builder = new UnstructuredMeshBuilder(2, "inputs");
