@@ -123,7 +123,7 @@ public static class GmshReader
 
             if (dimension < 2)
             {
-                throw cursor.ErrorAt(_elementsLine, $"expected 2-D elements (triangles, quadrangles) or 3-D elements (tetrahedra, hexahedra, prisms, pyramids), found {(dimension == 1 ? "lines and points" : "no cells")} only");
+                throw cursor.ErrorAt(_elementsLine, $"expected 2-D elements (triangles, quadrangles) or 3-D elements (tetrahedra, hexahedra, prisms, pyramids), found {(dimension == 1 ? "lines and points only" : "no elements")}; when physical groups are defined Gmsh saves only their elements, so put the cells in a physical surface or volume");
             }
 
             var builder = new UnstructuredMeshBuilder(dimension, cursor.FileName) { NodeTags = _nodeTags };

@@ -17,6 +17,7 @@ public sealed class GmshMalformedFileTests
         { "duplicate-node-tag.msh", "duplicate-node-tag.msh, line 18: expected each node tag once, found node tag 2 a second time" },
         { "element-count-mismatch.msh", "element-count-mismatch.msh, line 24: expected 5 elements as the $Elements header declares, found 4 in 2 blocks" },
         { "missing-node-reference.msh", "missing-node-reference.msh, line 30: expected 3 node tags for element 4 (type 2) on its line, found 2" },
+        { "lines-only.msh", "lines-only.msh, line 17: expected 2-D elements (triangles, quadrangles) or 3-D elements (tetrahedra, hexahedra, prisms, pyramids), found lines and points only; when physical groups are defined Gmsh saves only their elements, so put the cells in a physical surface or volume" },
         { "misspelt-end-marker.msh", "misspelt-end-marker.msh, line 22: expected $EndNodes, found '$EndNode'" },
         { "no-mesh-format.msh", "no-mesh-format.msh, line 1: expected $MeshFormat as the first section, found '$Nodes'" },
         { "node-count-mismatch.msh", "node-count-mismatch.msh, line 14: expected 4 nodes as the $Nodes header declares, found 3 in 1 block" },

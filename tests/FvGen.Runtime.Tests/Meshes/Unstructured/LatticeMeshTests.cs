@@ -52,6 +52,25 @@ public sealed class LatticeMeshTests
         AssertContract(mesh);
     }
 
+    [Theory]
+    [InlineData(1e-6)]
+    [InlineData(1e6)]
+    public void ValidationTolerancesScaleWithTheCells(double scale)
+    {
+        // A micro-channel and a reservoir: the same perturbed tetrahedral box at 1e-6 and 1e6 times the size
+        // passes validation, and its volume is the box volume (closed form) to the same relative accuracy.
+        var builder = BoxMesh.CreateBuilder(3, 2, 2, 0, 2 * scale, 0, scale, 0, scale, BoxCellKind.Tetrahedra);
+        NodePerturbation.PerturbInteriorNodes(builder, 0.2, seed: 8);
+        var mesh = builder.Build();
+        double total = 0;
+        foreach (double v in mesh.CellVolumes)
+        {
+            total += v;
+        }
+
+        Assert.Equal(1.0, total / (2 * scale * scale * scale), 12);
+    }
+
     [Fact]
     public void TetrahedralBoxIsConforming()
     {
