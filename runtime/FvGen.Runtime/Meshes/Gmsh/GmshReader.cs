@@ -60,8 +60,14 @@ public static class GmshReader
             }
 
             ReadMeshFormat();
+            var seen = new HashSet<string>(StringComparer.Ordinal);
             while (cursor.Next() is { } marker)
             {
+                if (marker is "$PhysicalNames" or "$Entities" or "$Nodes" or "$Elements" && !seen.Add(marker))
+                {
+                    throw cursor.Error($"expected one {marker} section, found a second one");
+                }
+
                 switch (marker)
                 {
                     case "$MeshFormat":

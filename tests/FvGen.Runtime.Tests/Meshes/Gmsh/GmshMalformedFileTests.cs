@@ -22,6 +22,7 @@ public sealed class GmshMalformedFileTests
         { "no-mesh-format.msh", "no-mesh-format.msh, line 1: expected $MeshFormat as the first section, found '$Nodes'" },
         { "node-count-mismatch.msh", "node-count-mismatch.msh, line 14: expected 4 nodes as the $Nodes header declares, found 3 in 1 block" },
         { "off-plane-node.msh", "off-plane-node.msh, line 21: expected z = 0 for node 3 of a 2-D mesh (FvGen's 2-D meshes lie in the plane z = 0), found z = 0.25" },
+        { "repeated-section.msh", "repeated-section.msh, line 23: expected one $Nodes section, found a second one" },
         { "second-order-element.msh", "second-order-element.msh, line 29: expected a first-order element type (1 (line), 2 (triangle), 3 (quadrangle), 4 (tetrahedron), 5 (hexahedron), 6 (prism), 7 (pyramid), 15 (point)), found type 9, a higher-order element; mesh with element order 1" },
         { "truncated.msh", "truncated.msh, line 21: expected the x coordinate of node 3, found the end of the file" },
         { "unclosed-section.msh", "unclosed-section.msh, line 33: expected $EndComments to close the $Comments section opened on line 8, found the end of the file" },
