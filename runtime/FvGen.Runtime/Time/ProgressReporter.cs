@@ -82,6 +82,6 @@ public sealed class ProgressReporter
         _lastStep = step;
         Writer.WriteLine(string.Create(
             CultureInfo.InvariantCulture,
-            $"step {step,8}  t = {time,-14:G8}  dt = {dt:E3}  ledger imbalance (relative): step {stepImbalance:E1}, cumulative {cumulativeImbalance:E1}"));
+            $"step {step,8}  t = {time,-14:G8}  dt = {dt:0.000E+00}  ledger imbalance (relative): step {stepImbalance:0.0E+00}, cumulative {cumulativeImbalance:0.0E+00}"));
     }
 }

@@ -52,7 +52,7 @@ public sealed class TimeMarchTests
         Assert.Equal(4, lines.Length);
         Assert.StartsWith("step        0  t = 0 ", lines[0]);
         Assert.StartsWith("step       10  t = 0.1 ", lines[1]);
-        Assert.Contains("dt = 1.000E-002", lines[1]);
+        Assert.Contains("dt = 1.000E-02", lines[1]);
         Assert.Contains("ledger imbalance (relative): step ", lines[1]);
         Assert.StartsWith("step       25  t = 0.25 ", lines[3]);
     }
