@@ -35,6 +35,28 @@ public abstract class TimeIntegrator<TState>
             throw new ArgumentException("An integrator needs at least one stage, with one weight and one time fraction per stage.");
         }
 
+        double weightSum = 0;
+        foreach (double w in stageWeights)
+        {
+            weightSum += w;
+        }
+
+        // Consistency: a step of a constant residual r must change the state by exactly Δt·r.
+        if (Math.Abs(weightSum - 1.0) > 1e-14)
+        {
+            throw new ArgumentException(
+                string.Create(CultureInfo.InvariantCulture, $"The effective stage weights must sum to 1; they sum to {weightSum:R}."), nameof(stageWeights));
+        }
+
+        foreach (double c in stageTimes)
+        {
+            if (!(c >= 0 && c <= 1))
+            {
+                throw new ArgumentException(
+                    string.Create(CultureInfo.InvariantCulture, $"Stage time fractions must lie in [0, 1]; got {c:R}."), nameof(stageTimes));
+            }
+        }
+
         CellCount = cellCount;
         _stageWeights = stageWeights;
         _stageTimes = stageTimes;

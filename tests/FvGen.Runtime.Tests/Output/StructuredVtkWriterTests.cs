@@ -117,6 +117,16 @@ public sealed class StructuredVtkWriterTests
     }
 
     [Fact]
+    public void UniformAxisWithRoundedNodesStillCountsAsUniformButAGeometricOneDoesNot()
+    {
+        // Nodes start + i·h carry rounding (0.1 + 3·0.1 ≠ 0.4 exactly); that is still a uniform grid.
+        var uniform = new StructuredGrid2D(GridAxis.Uniform(7, 0.1, 0.8), GridAxis.Uniform(3, 0, 0.3), Wall, Wall, Wall, Wall);
+        var stretched = new StructuredGrid2D(GridAxis.Uniform(7, 0.1, 0.8), GridAxis.Geometric(3, 0, 0.3, 1.01), Wall, Wall, Wall, Wall);
+        Assert.Equal(StructuredVtkLayout.StructuredPoints, StructuredVtkWriter.LayoutFor(uniform));
+        Assert.Equal(StructuredVtkLayout.RectilinearGrid, StructuredVtkWriter.LayoutFor(stretched));
+    }
+
+    [Fact]
     public void WriteInterruptedByAnExceptionLeavesNoFileAndNoTemporaryFile()
     {
         using var folder = new TemporaryFolder();

@@ -107,4 +107,45 @@ public sealed class TimeMarchTests
             TimeStepRule<Tracers>.Fixed(0.1)));
         Assert.Contains("made for 10 cells but the field has 20", ex.Message);
     }
+
+    [Fact]
+    public void MarchingAllocatesNothingPerStepWhenProgressIsOff()
+    {
+        // Two runs that differ only in their number of steps allocate the same: the setup
+        // (schedule, summary) allocates, the steps themselves (CFL step, integrator, ledger,
+        // health checks) do not.
+        var grid = Channel();
+        var march = March(grid, TimeStepRule<Tracers>.FromCfl(0.5, (in Tracers _, int _) => 1.0));
+        // A requirement the manufactured state always meets, so that the rule is evaluated every step.
+        march.Health.RequireComponent("Mass", static m => m > -1e6, "> -1e6");
+        march.Run(0.0, 0.05);
+
+        long before = GC.GetAllocatedBytesForCurrentThread();
+        march.Run(0.0, 0.05);
+        long shortRun = GC.GetAllocatedBytesForCurrentThread() - before;
+        before = GC.GetAllocatedBytesForCurrentThread();
+        var result = march.Run(0.0, 2.0);
+        long longRun = GC.GetAllocatedBytesForCurrentThread() - before;
+
+        Assert.True(result.Steps > 50);
+        Assert.Equal(shortRun, longRun);
+    }
+
+    [Fact]
+    public void IntegratorWeightsThatDoNotSumToOneAreRejected()
+    {
+        var ex = Assert.Throws<ArgumentException>(() => new HalfWeightEuler());
+        Assert.Contains("must sum to 1; they sum to 0.5", ex.Message);
+    }
+
+    private sealed class HalfWeightEuler() : TimeIntegrator<Tracers>(4, 2, [0.5], [0.0])
+    {
+        public override string Name => "broken";
+
+        public override int Order => 1;
+
+        protected override void StepCore(Span<Tracers> state, double time, double dt, ResidualFunction<Tracers> residual, IStageFluxObserver? observer)
+        {
+        }
+    }
 }
