@@ -42,7 +42,7 @@ internal static class ProfilePlot
         plot.Axes.SetLimitsY(0, 1.1 * Math.Max(ChannelScenario.InflowSalt, ChannelScenario.InitialSalt), plot.Axes.Right);
 
         byte[] png = plot.GetImageBytes(1000, 520, ScottPlot.ImageFormat.Png);
-        WriteWhole(path, png);
+        FvGen.Output.AtomicFile.WriteBytes(path, png);
     }
 
     private static ScottPlot.Plottables.Scatter AddLine(ScottPlot.Plot plot, double[] x, double[] y, string label, ScottPlot.Color colour, bool dashed)
@@ -58,21 +58,5 @@ internal static class ProfilePlot
         }
 
         return line;
-    }
-
-    // The same temporary-name-and-rename rule as the runtime's text outputs, for bytes.
-    private static void WriteWhole(string path, byte[] bytes)
-    {
-        string temporary = path + $".{Environment.ProcessId}.partial";
-        try
-        {
-            File.WriteAllBytes(temporary, bytes);
-            File.Move(temporary, path, overwrite: true);
-        }
-        catch
-        {
-            File.Delete(temporary);
-            throw;
-        }
     }
 }
