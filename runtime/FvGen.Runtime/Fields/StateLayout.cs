@@ -19,6 +19,23 @@ public static class StateLayout<TState>
     /// <summary>Component names in memory order.</summary>
     public static IReadOnlyList<string> ComponentNames => Names;
 
+    /// <summary>
+    /// The index of the component called <paramref name="name"/> (ordinal match); a clear error
+    /// listing the known names when there is none.
+    /// </summary>
+    public static int IndexOf(string name)
+    {
+        ArgumentNullException.ThrowIfNull(name);
+        int index = Array.IndexOf(Names, name);
+        if (index < 0)
+        {
+            throw new ArgumentException(
+                $"{typeof(TState).Name} has no component '{name}'; its components are {string.Join(", ", Names)}.", nameof(name));
+        }
+
+        return index;
+    }
+
     private static string[] Describe()
     {
         var names = new List<string>();

@@ -9,8 +9,25 @@ public static class AtomicFile
     /// <summary>Writes <paramref name="path"/> through <paramref name="write"/>; the file appears whole or not at all.</summary>
     public static void Write(string path, Action<TextWriter> write)
     {
-        ArgumentException.ThrowIfNullOrEmpty(path);
         ArgumentNullException.ThrowIfNull(write);
+        WriteStream(path, stream =>
+        {
+            using var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false), leaveOpen: true);
+            writer.NewLine = "\n";
+            write(writer);
+        });
+    }
+
+    /// <summary>Writes <paramref name="bytes"/> (an image, say) to <paramref name="path"/>; the file appears whole or not at all.</summary>
+    public static void WriteBytes(string path, ReadOnlySpan<byte> bytes)
+    {
+        byte[] copy = bytes.ToArray();
+        WriteStream(path, stream => stream.Write(copy));
+    }
+
+    private static void WriteStream(string path, Action<Stream> write)
+    {
+        ArgumentException.ThrowIfNullOrEmpty(path);
         string full = Path.GetFullPath(path);
         string folder = Path.GetDirectoryName(full) ?? ".";
         Directory.CreateDirectory(folder);
@@ -18,11 +35,8 @@ public static class AtomicFile
         try
         {
             using (var stream = new FileStream(temporary, FileMode.CreateNew, FileAccess.Write, FileShare.None))
-            using (var writer = new StreamWriter(stream, new System.Text.UTF8Encoding(encoderShouldEmitUTF8Identifier: false)))
             {
-                writer.NewLine = "\n";
-                write(writer);
-                writer.Flush();
+                write(stream);
                 stream.Flush(flushToDisk: true);
             }
 
