@@ -33,7 +33,7 @@ public sealed class UnstructuredResidualTests
         var binding = new BoundaryBinding<Advection.Boundary>();
         foreach (string name in mesh.PatchNames)
         {
-            binding.Bind(name, name == "yHigh" ? Advection.Boundary.Wall : Advection.Boundary.Open);
+            binding.Bind(name, name == "north" ? Advection.Boundary.Wall : Advection.Boundary.Open);
         }
 
         var state = new Scalar[mesh.CellCount];
