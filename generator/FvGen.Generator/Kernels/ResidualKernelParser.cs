@@ -389,9 +389,10 @@ internal static class ResidualKernelParser
             return parameters.Any(p => p.Role == ParameterRole.FaceBuffer) ? "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather" : null;
         }
 
-        if (mesh != MeshKind.Unstructured)
+        if (mesh == MeshKind.Structured1D || (mesh != MeshKind.Unstructured && mode == KernelMode.ParallelGather))
         {
-            return "ExecutionMode." + mode + " is generated for unstructured meshes; structured grids run SerialScatter";
+            return "ExecutionMode." + mode + " is generated for unstructured meshes"
+                + (mode == KernelMode.ParallelGather ? " (structured 2-D and 3-D grids run ParallelColouredScatter, by slabs)" : "; a 1-D grid has no slabs to share out, use SerialScatter");
         }
 
         if (!parameters.Any(p => p.Role == ParameterRole.State && p.IsMemory) || !parameters.Any(p => p.Role == ParameterRole.Residual && p.IsMemory))

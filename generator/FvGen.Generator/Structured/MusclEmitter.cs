@@ -18,14 +18,9 @@ namespace FvGen.Generator.Structured;
 /// </remarks>
 internal static class MusclEmitter
 {
-    public static void Declare(IndentedWriter w, ResidualKernelModel model, int dim)
+    /// <summary>Writes the limiter as a static local function (the periodicity flags are declared with the axes).</summary>
+    public static void DeclareLimiter(IndentedWriter w, ResidualKernelModel model)
     {
-        string[] axes = { "x", "y", "z" };
-        for (int d = 0; d < dim; d++)
-        {
-            w.Line("bool " + axes[d] + "Periodic = mesh.IsPeriodic(" + d + ");");
-        }
-
         w.Line();
         w.Line("// " + model.Limiter + " limiter φ(θ), θ = forward / backward difference; the slope is φ(θ) · backward.");
         w.Line("[global::System.Runtime.CompilerServices.MethodImpl(global::System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]");

@@ -1,5 +1,6 @@
 using System;
 using System.Collections.Generic;
+using System.Linq;
 using FvGen.Generator.Common;
 using FvGen.Generator.Kernels;
 
@@ -24,6 +25,7 @@ internal static class StructuredEmitter
     public static void Emit(IndentedWriter w, ResidualKernelModel model)
     {
         int dim = (int)model.Mesh;
+        bool parallel = model.Mode == KernelMode.ParallelColouredScatter;
         var state = KernelNames.Find(model, ParameterRole.State)!;
         var residual = KernelNames.Find(model, ParameterRole.Residual)!;
         if (state.IsMemory)
@@ -36,31 +38,28 @@ internal static class StructuredEmitter
             w.Line("global::System.Span<" + model.State.FullyQualifiedName + "> residual = residualMemory.Span;");
         }
 
-        for (int a = 0; a < dim; a++)
-        {
-            string ax = Axis[a];
-            w.Line("int " + Count[a] + " = mesh." + ax.ToUpperInvariant() + ".CellCount;");
-            w.Line("global::System.ReadOnlySpan<double> " + ax + "Nodes = mesh." + ax.ToUpperInvariant() + ".Nodes;");
-            w.Line("global::System.ReadOnlySpan<double> " + ax + "Centres = mesh." + ax.ToUpperInvariant() + ".Centres;");
-            w.Line("global::System.ReadOnlySpan<double> " + ax + "Widths = mesh." + ax.ToUpperInvariant() + ".Widths;");
-        }
-
-        if (dim == 3)
-        {
-            w.Line("int plane = nx * ny;");
-        }
-
+        DeclareAxes(w, model, dim);
         w.Line("residual.Clear();");
         if (model.Reconstruction == KernelReconstruction.Linear)
         {
-            MusclEmitter.Declare(w, model, dim);
+            MusclEmitter.DeclareLimiter(w, model);
         }
 
         bool hasBoundaries = KernelNames.Find(model, ParameterRole.Boundaries) is not null;
         for (int d = 0; d < dim; d++)
         {
             w.Line();
-            Interior(w, model, dim, d);
+            if (parallel)
+            {
+                int slab = SlabAxis(dim, d);
+                w.Line("// " + Axis[d] + " faces, interior: one parallel task per " + Axis[slab] + " slab; the faces of a slab touch only its own cells.");
+                w.Line("global::System.Threading.Tasks.Parallel.For(0, " + Count[slab] + ", options, slab => Interior" + Axis[d].ToUpperInvariant() + "(mesh, stateMemory.Span, residualMemory.Span, slab));");
+            }
+            else
+            {
+                Interior(w, model, dim, d, slabAxis: null);
+            }
+
             w.Line();
             w.Open("if (mesh.IsPeriodic(" + d + "))");
             Periodic(w, model, dim, d);
@@ -78,9 +77,52 @@ internal static class StructuredEmitter
         w.Line();
         w.Line("// Residual = -(1/V) Σ flux·area out of each cell.");
         KernelEmitter.DivideByVolumes(w, "residual", "0", "residual.Length");
+        if (!parallel)
+        {
+            return;
+        }
+
+        string s = model.State.FullyQualifiedName;
+        for (int d = 0; d < dim; d++)
+        {
+            w.Line();
+            w.Open("static void Interior" + Axis[d].ToUpperInvariant() + "(" + model.Parameters.First(p => p.Role == ParameterRole.Mesh).TypeText
+                + " mesh, global::System.ReadOnlySpan<" + s + "> state, global::System.Span<" + s + "> residual, int slab)");
+            DeclareAxes(w, model, dim);
+            Interior(w, model, dim, d, SlabAxis(dim, d));
+            w.Close();
+        }
     }
 
-    private static void Interior(IndentedWriter w, ResidualKernelModel model, int dim, int d)
+    /// <summary>The axis whose slabs a parallel task owns for faces of direction <paramref name="d"/>: any other axis, the outermost one possible.</summary>
+    private static int SlabAxis(int dim, int d) => d == dim - 1 ? dim - 2 : dim - 1;
+
+    private static void DeclareAxes(IndentedWriter w, ResidualKernelModel model, int dim)
+    {
+        for (int a = 0; a < dim; a++)
+        {
+            string ax = Axis[a];
+            w.Line("int " + Count[a] + " = mesh." + ax.ToUpperInvariant() + ".CellCount;");
+            w.Line("global::System.ReadOnlySpan<double> " + ax + "Nodes = mesh." + ax.ToUpperInvariant() + ".Nodes;");
+            w.Line("global::System.ReadOnlySpan<double> " + ax + "Centres = mesh." + ax.ToUpperInvariant() + ".Centres;");
+            w.Line("global::System.ReadOnlySpan<double> " + ax + "Widths = mesh." + ax.ToUpperInvariant() + ".Widths;");
+        }
+
+        if (dim == 3)
+        {
+            w.Line("int plane = nx * ny;");
+        }
+
+        if (model.Reconstruction == KernelReconstruction.Linear)
+        {
+            for (int a = 0; a < dim; a++)
+            {
+                w.Line("bool " + Axis[a] + "Periodic = mesh.IsPeriodic(" + a + ");");
+            }
+        }
+    }
+
+    private static void Interior(IndentedWriter w, ResidualKernelModel model, int dim, int d, int? slabAxis)
     {
         w.Line("// " + Axis[d] + " faces between cells (" + Index[d] + " - 1) and " + Index[d] + " along " + Axis[d] + ": interior faces, normal +" + Axis[d] + ".");
         Nest(w, dim, d, fixedIndex: null, body =>
@@ -92,7 +134,7 @@ internal static class StructuredEmitter
             FaceFlux(body, model, d, "left", "right", Index[d] + " - 1", Index[d]);
             body.Line("residual[left] -= flux;");
             body.Line("residual[right] += flux;");
-        });
+        }, slabAxis);
     }
 
     private static void Periodic(IndentedWriter w, ResidualKernelModel model, int dim, int d)
@@ -155,7 +197,7 @@ internal static class StructuredEmitter
     /// runs from 1 (interior faces) or is fixed to <paramref name="fixedIndex"/> (one layer of faces).
     /// The face area is written as soon as the indices it needs are known.
     /// </summary>
-    private static void Nest(IndentedWriter w, int dim, int d, string? fixedIndex, Action<IndentedWriter> body)
+    private static void Nest(IndentedWriter w, int dim, int d, string? fixedIndex, Action<IndentedWriter> body, int? slabAxis = null)
     {
         var areaAxes = new List<int>();
         for (int a = 0; a < dim; a++)
@@ -176,6 +218,12 @@ internal static class StructuredEmitter
         {
             w.Line("int " + Index[d] + " = " + fixedIndex + ";");
             bound.Add(d);
+        }
+
+        if (slabAxis is { } slab)
+        {
+            w.Line("int " + Index[slab] + " = slab;");
+            bound.Add(slab);
         }
 
         void WriteAreaIfReady()

@@ -45,6 +45,9 @@ public static partial class Advection
     [ResidualKernel(nameof(Upwind))]
     public static partial void Residual3D(StructuredGrid3D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
+    [ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelColouredScatter)]
+    public static partial void Slabs3D(StructuredGrid3D grid, ReadOnlyMemory<Scalar> u, Memory<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
     [ResidualKernel(nameof(Upwind))]
     public static partial void ResidualUnstructured(UnstructuredMesh mesh, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 

@@ -75,6 +75,10 @@ public static partial class ShallowWater
     [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral)]
     public static partial void Muscl2D(StructuredGrid2D grid, ReadOnlySpan<WaterState> state, Span<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral, Mode = ExecutionMode.ParallelColouredScatter)]
+    public static partial void MusclSlabs2D(
+        StructuredGrid2D grid, ReadOnlyMemory<WaterState> state, Memory<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
     [ResidualKernel(nameof(Rusanov))]
     public static partial void Serial(UnstructuredMesh mesh, ReadOnlySpan<WaterState> state, Span<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
