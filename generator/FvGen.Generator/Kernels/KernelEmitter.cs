@@ -27,7 +27,8 @@ internal static class KernelEmitter
             MeshKind.Structured3D => "StructuredGrid3D",
             _ => "UnstructuredMesh",
         };
-        string order = model.Reconstruction != KernelReconstruction.Linear ? "first order"
+        string order = model.Reconstruction == KernelReconstruction.User ? "user reconstruction " + model.UserReconstruction?.Name
+            : model.Reconstruction != KernelReconstruction.Linear ? "first order"
             : model.Mesh == MeshKind.Unstructured ? "linear reconstruction, Green-Gauss gradients, Barth-Jespersen limiter"
             : "MUSCL, " + model.Limiter + " limiter";
         if (model.Flux.TakesGradients)

@@ -23,6 +23,7 @@ namespace FvGen.Generator.Kernels;
 /// <param name="Mode">How the loops run.</param>
 /// <param name="Reconstruction">How face states are obtained.</param>
 /// <param name="Limiter">The limiter of a linear reconstruction.</param>
+/// <param name="UserReconstruction">The user reconstruction to call when <paramref name="Reconstruction"/> is <c>User</c>.</param>
 internal sealed record ResidualKernelModel(
     TypeLocation Location,
     string TypeName,
@@ -35,7 +36,8 @@ internal sealed record ResidualKernelModel(
     EquatableArray<BoundaryFluxEntry> BoundaryFluxes,
     KernelMode Mode,
     KernelReconstruction Reconstruction,
-    KernelLimiter Limiter)
+    KernelLimiter Limiter,
+    FluxCall? UserReconstruction = null)
 {
     /// <summary>True when the kernel computes Green–Gauss cell gradients first (linear reconstruction or a diffusion flux on an unstructured mesh).</summary>
     public bool NeedsGradients => Mesh == MeshKind.Unstructured && (Reconstruction == KernelReconstruction.Linear || Flux.TakesGradients);

@@ -53,6 +53,15 @@ internal static class MusclEmitter
         string s = model.State.FullyQualifiedName;
         w.Line("int leftLeft = " + leftAlong + " >= 1 ? " + left + " - " + stride + " : " + axis + "Periodic ? " + left + " + (" + count + " - 1) * " + stride + " : -1;");
         w.Line("int rightRight = " + rightAlong + " <= " + count + " - 2 ? " + right + " + " + stride + " : " + axis + "Periodic ? " + right + " - (" + count + " - 1) * " + stride + " : -1;");
+        if (model.UserReconstruction is { } user)
+        {
+            // A missing second neighbour (next to a boundary patch) is replaced by the cell itself.
+            string m = user.StateModifier;
+            w.Line(model.TypeName + "." + user.Name + "(" + m + "state[leftLeft >= 0 ? leftLeft : " + left + "], " + m + "state[" + left + "], " + m + "state[" + right + "], "
+                + m + "state[rightRight >= 0 ? rightRight : " + right + "], out " + s + " leftFace, out " + s + " rightFace);");
+            return;
+        }
+
         w.Line("ref readonly " + s + " uL = ref state[" + left + "];");
         w.Line("ref readonly " + s + " uR = ref state[" + right + "];");
         w.Line(s + " leftFace = uL;");

@@ -113,7 +113,7 @@ internal static class StructuredEmitter
             w.Line("int plane = nx * ny;");
         }
 
-        if (model.Reconstruction == KernelReconstruction.Linear)
+        if (model.Reconstruction != KernelReconstruction.FirstOrder)
         {
             for (int a = 0; a < dim; a++)
             {
@@ -181,7 +181,7 @@ internal static class StructuredEmitter
     private static void FaceFlux(IndentedWriter w, ResidualKernelModel model, int d, string left, string right, string leftAlong, string rightAlong)
     {
         string s = model.State.FullyQualifiedName;
-        if (model.Reconstruction == KernelReconstruction.Linear)
+        if (model.Reconstruction != KernelReconstruction.FirstOrder)
         {
             MusclEmitter.FaceStates(w, model, Axis[d], Count[d], Stride[d], left, right, leftAlong, rightAlong);
             w.Line(s + " flux = " + KernelEmitter.FluxCall(model, "leftFace", "rightFace", "face") + " * area;");

@@ -20,15 +20,27 @@ public sealed class ResidualKernelAttribute : Attribute
     /// <summary>The name of a method marked <see cref="NumericalFluxAttribute"/> in the same type.</summary>
     public string NumericalFlux { get; }
 
-    /// <summary>How the loops run. Serial scatter by default.</summary>
+    /// <summary>
+    /// How the loops run. Serial scatter by default; parallel gather on unstructured meshes; parallel
+    /// coloured scatter on unstructured meshes and on 2-D and 3-D structured grids.
+    /// </summary>
     public ExecutionMode Mode { get; set; } = ExecutionMode.SerialScatter;
 
     /// <summary>First order by default.</summary>
     public ReconstructionKind Reconstruction { get; set; } = ReconstructionKind.FirstOrder;
 
-    /// <summary>The limiter of a linear reconstruction.</summary>
+    /// <summary>
+    /// The limiter of a linear reconstruction: minmod (the default), van Leer, MC or superbee for MUSCL on
+    /// structured grids; on unstructured meshes an unset limiter means Barth–Jespersen, the only one there.
+    /// </summary>
     public LimiterKind Limiter { get; set; } = LimiterKind.Minmod;
 
-    /// <summary>The name of a user reconstruction method when <see cref="Reconstruction"/> is <see cref="ReconstructionKind.User"/>.</summary>
+    /// <summary>
+    /// The name of a user reconstruction method in the kernel's type, used when <see cref="Reconstruction"/>
+    /// is <see cref="ReconstructionKind.User"/> (structured grids): <c>static void Name(in TState leftLeft,
+    /// in TState left, in TState right, in TState rightRight, out TState leftFace, out TState rightFace)</c>,
+    /// the four cells along the face direction; next to a boundary patch the missing outer cell is
+    /// replaced by its neighbour.
+    /// </summary>
     public string? UserReconstruction { get; set; }
 }

@@ -63,6 +63,22 @@ public static partial class Advection
     [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.Superbee)]
     public static partial void MusclSuperbee1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
+    /// <summary>
+    /// Fromm's unlimited central slope σ_i = (u_{i+1} − u_{i−1}) / 2 (LeVeque 2002, §6.5), as a user
+    /// reconstruction: each face sees its two cells extrapolated half a cell.
+    /// </summary>
+    public static void Fromm(in Scalar leftLeft, in Scalar left, in Scalar right, in Scalar rightRight, out Scalar leftFace, out Scalar rightFace)
+    {
+        leftFace = new Scalar(left.Value + 0.25 * (right.Value - leftLeft.Value));
+        rightFace = new Scalar(right.Value - 0.25 * (rightRight.Value - left.Value));
+    }
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(Fromm))]
+    public static partial void Fromm1D(StructuredGrid1D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(Fromm))]
+    public static partial void Fromm2D(StructuredGrid2D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
     [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.VanLeer)]
     public static partial void MusclVanLeer3D(StructuredGrid3D grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 }

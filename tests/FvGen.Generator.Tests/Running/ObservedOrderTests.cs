@@ -29,6 +29,7 @@ public sealed class ObservedOrderTests(ITestOutputHelper output)
         { "VanLeer", 2.0 },
         { "MonotonizedCentral", 2.0 },
         { "Superbee", 2.0 },
+        { "UserFromm", 2.0 },
     };
 
     [Theory]
@@ -41,6 +42,7 @@ public sealed class ObservedOrderTests(ITestOutputHelper output)
             "Minmod" => Advection.MusclMinmod1D,
             "VanLeer" => Advection.MusclVanLeer1D,
             "MonotonizedCentral" => Advection.MusclMC1D,
+            "UserFromm" => Advection.Fromm1D,
             _ => Advection.MusclSuperbee1D,
         };
 

@@ -59,6 +59,18 @@ public sealed class StructuredResidualTests
     }
 
     [Theory]
+    [InlineData(true, false, 41)]
+    [InlineData(false, false, 42)]
+    public void UserReconstruction2D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool periodicX, bool periodicY, int seed)
+    {
+        var random = new Random(seed);
+        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
+        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
+        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 12), RandomGrids.Axis(random, 10), xl, xh, yl, yh);
+        Check(grid, random, Advection.Fromm2D);
+    }
+
+    [Theory]
     [InlineData(false, false, 13)]
     [InlineData(true, false, 14)]
     public void ShallowWater2D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool periodicX, bool periodicY, int seed)
