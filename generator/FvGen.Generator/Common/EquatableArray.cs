@@ -11,7 +11,6 @@ namespace FvGen.Generator.Common;
 /// the incremental pipeline can tell an unchanged model from a changed one.
 /// </summary>
 internal readonly struct EquatableArray<T> : IEquatable<EquatableArray<T>>, IReadOnlyList<T>
-    where T : IEquatable<T>
 {
     private readonly T[]? _items;
 
@@ -36,7 +35,7 @@ internal readonly struct EquatableArray<T> : IEquatable<EquatableArray<T>>, IRea
 
         for (int i = 0; i < a.Length; i++)
         {
-            if (!a[i].Equals(b[i]))
+            if (!EqualityComparer<T>.Default.Equals(a[i], b[i]))
             {
                 return false;
             }
@@ -52,7 +51,7 @@ internal readonly struct EquatableArray<T> : IEquatable<EquatableArray<T>>, IRea
         int hash = 17;
         foreach (var item in _items ?? Array.Empty<T>())
         {
-            hash = unchecked((hash * 31) + item.GetHashCode());
+            hash = unchecked((hash * 31) + EqualityComparer<T>.Default.GetHashCode(item!));
         }
 
         return hash;

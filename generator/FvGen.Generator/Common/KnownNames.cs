@@ -17,6 +17,7 @@ internal static class KnownNames
     public const string BoundaryBinding = "FvGen.Boundaries.BoundaryBinding`1";
     public const string BoundaryFluxTally = "FvGen.Ledger.BoundaryFluxTally";
     public const string ParallelOptions = "System.Threading.Tasks.ParallelOptions";
+    public const string ExecutionMode = "FvGen.ExecutionMode";
 
     /// <summary>The name of the enum written beside the boundary fluxes of a type.</summary>
     public const string BoundaryEnumName = "Boundary";

@@ -1,3 +1,4 @@
+using System.Collections.Generic;
 using System.Linq;
 using FvGen.Generator.Common;
 using FvGen.Generator.Structured;
@@ -44,7 +45,8 @@ internal static class KernelEmitter
         return GeneratedFile.Write(model.Location, Describe(model), w =>
         {
             var options = KernelNames.Find(model, ParameterRole.ParallelOptions);
-            bool parallel = model.Mode != KernelMode.SerialScatter;
+            var modes = model.RuntimeModes.Count > 0 ? model.RuntimeModes.ToList() : new List<KernelMode> { model.Mode };
+            bool parallel = modes.Any(m => m != KernelMode.SerialScatter);
             if (parallel && options is null)
             {
                 w.Line("private static readonly global::System.Threading.Tasks.ParallelOptions " + model.MethodName + KernelNames.DefaultOptionsSuffix + " = new();");
@@ -55,28 +57,64 @@ internal static class KernelEmitter
             w.Line("// Face loops in telescoping form: every face flux is evaluated once, taken from the cell behind");
             w.Line("// the face and given to the cell in front, so Σ residual·volume = -Σ boundary flux·area.");
             w.Open(model.Modifiers + " void " + model.MethodName + "(" + string.Join(", ", declared) + ")");
-            var arguments = model.Parameters.Select(p => p.Name).ToList();
-            var core = model.Parameters.Select(p => p.Prefix + p.TypeText + " " + KernelNames.Of(p)).ToList();
+            var passed = model.Parameters.Where(p => p.Role != ParameterRole.Mode).ToList();
+            var arguments = passed.Select(p => p.Name).ToList();
+            var core = passed.Select(p => p.Prefix + p.TypeText + " " + KernelNames.Of(p)).ToList();
             if (parallel && options is null)
             {
                 arguments.Add(model.MethodName + KernelNames.DefaultOptionsSuffix);
                 core.Add("global::System.Threading.Tasks.ParallelOptions options");
             }
 
-            w.Line(KernelNames.CoreFunction + "(" + string.Join(", ", arguments) + ");");
-            w.Line();
-            w.Open("static void " + KernelNames.CoreFunction + "(" + string.Join(", ", core) + ")");
-            Prologue(w, model);
-            if (model.Mesh == MeshKind.Unstructured)
+            string call = "(" + string.Join(", ", arguments) + ");";
+            var mode = KernelNames.Find(model, ParameterRole.Mode);
+            if (mode is null)
             {
-                UnstructuredEmitter.Emit(w, model);
+                w.Line(KernelNames.CoreFunction + call);
             }
             else
             {
-                StructuredEmitter.Emit(w, model);
+                w.Line("// The execution mode is chosen at run time among those these parameters support.");
+                w.Line("switch (" + mode.Name + ")");
+                w.Open();
+                foreach (var m in modes)
+                {
+                    w.Line("case global::FvGen.ExecutionMode." + m + ":");
+                    w.Line("    " + KernelNames.CoreFunction + m + call);
+                    w.Line("    break;");
+                }
+
+                w.Line("default:");
+                w.Line("    throw new global::System.ArgumentException(\"" + model.MethodName + ": ExecutionMode.\" + " + mode.Name + " + \" is not available with these parameters; available: "
+                    + string.Join(", ", modes) + ".\", " + SourceLiteral.String(mode.Name) + ");");
+                w.Close();
             }
 
-            w.Close();
+            foreach (var m in modes)
+            {
+                var variant = model with { Mode = m };
+                string name = KernelNames.CoreFunction + (mode is null ? "" : m.ToString());
+                w.Line();
+                w.Line("// ExecutionMode." + m + ": " + m switch
+                {
+                    KernelMode.ParallelGather => "face fluxes into the face buffer in parallel, then each cell gathers its faces in a fixed order.",
+                    KernelMode.ParallelColouredScatter => "faces scattered in parallel, colour by colour (slab by slab on structured grids).",
+                    _ => "one thread, each face scattered to its two cells.",
+                });
+                w.Open("static void " + name + "(" + string.Join(", ", core) + ")");
+                Prologue(w, variant);
+                if (variant.Mesh == MeshKind.Unstructured)
+                {
+                    UnstructuredEmitter.Emit(w, variant);
+                }
+                else
+                {
+                    StructuredEmitter.Emit(w, variant);
+                }
+
+                w.Close();
+            }
+
             w.Close();
         });
     }
@@ -96,7 +134,7 @@ internal static class KernelEmitter
         w.Line("int cellCount = mesh.CellCount;");
         LengthCheck(w, KernelNames.Of(state) + ".Length", "cellCount", state.Name, "cells", kernel);
         LengthCheck(w, KernelNames.Of(residual) + ".Length", "cellCount", residual.Name, "cells", kernel);
-        if (buffer is not null)
+        if (buffer is not null && model.Mode == KernelMode.ParallelGather)
         {
             w.Line("if (faceFluxMemory.Length < mesh.FaceCount)");
             w.Open();

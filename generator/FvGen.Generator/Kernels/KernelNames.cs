@@ -20,6 +20,7 @@ internal static class KernelNames
         ParameterRole.Tally => "tally",
         ParameterRole.ParallelOptions => "options",
         ParameterRole.GradientBuffer => p.IsMemory ? "gradientMemory" : "gradients",
+        ParameterRole.Mode => "mode",
         _ => "faceFluxMemory",
     };
 

@@ -24,6 +24,7 @@ namespace FvGen.Generator.Kernels;
 /// <param name="Reconstruction">How face states are obtained.</param>
 /// <param name="Limiter">The limiter of a linear reconstruction.</param>
 /// <param name="UserReconstruction">The user reconstruction to call when <paramref name="Reconstruction"/> is <c>User</c>.</param>
+/// <param name="RuntimeModes">When the kernel takes an <c>ExecutionMode</c> parameter: the modes its parameters support, chosen at run time; otherwise empty.</param>
 internal sealed record ResidualKernelModel(
     TypeLocation Location,
     string TypeName,
@@ -37,7 +38,8 @@ internal sealed record ResidualKernelModel(
     KernelMode Mode,
     KernelReconstruction Reconstruction,
     KernelLimiter Limiter,
-    FluxCall? UserReconstruction = null)
+    FluxCall? UserReconstruction = null,
+    EquatableArray<KernelMode> RuntimeModes = default)
 {
     /// <summary>True when the kernel computes Green–Gauss cell gradients first (linear reconstruction or a diffusion flux on an unstructured mesh).</summary>
     public bool NeedsGradients => Mesh == MeshKind.Unstructured && (Reconstruction == KernelReconstruction.Linear || Flux.TakesGradients);
@@ -71,6 +73,7 @@ internal enum ParameterRole
     ParallelOptions,
     FaceBuffer,
     GradientBuffer,
+    Mode,
 }
 
 /// <summary>Mirror of <c>FvGen.ExecutionMode</c> (same values).</summary>

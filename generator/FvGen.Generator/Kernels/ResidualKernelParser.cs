@@ -202,7 +202,28 @@ internal static class ResidualKernelParser
         // The attribute's default limiter (minmod) is a MUSCL limiter; on an unstructured mesh an
         // unspecified limiter means Barth–Jespersen, the only one generated there.
         var limiter = (KernelLimiter)NamedInt(attribute, "Limiter", mesh == MeshKind.Unstructured ? (int)KernelLimiter.BarthJespersen : 0);
-        string? modeProblem = CheckMode(mode, mesh.Value, parameters);
+        var runtimeModes = new List<KernelMode>();
+        string? modeProblem;
+        if (parameters.Any(p => p.Role == ParameterRole.Mode))
+        {
+            // The mode is chosen at run time among those these parameters support.
+            modeProblem = attribute.NamedArguments.Any(a => a.Key == "Mode")
+                ? "choose the execution mode either with the attribute's Mode or with an ExecutionMode parameter, not both"
+                : null;
+            foreach (KernelMode candidate in Enum.GetValues(typeof(KernelMode)))
+            {
+                if (CheckMode(candidate, mesh.Value, parameters, modeChosenAtRunTime: true) is null
+                    && (candidate == KernelMode.SerialScatter || !parameters.Any(p => p.Role == ParameterRole.GradientBuffer && !p.IsMemory)))
+                {
+                    runtimeModes.Add(candidate);
+                }
+            }
+        }
+        else
+        {
+            modeProblem = CheckMode(mode, mesh.Value, parameters, modeChosenAtRunTime: false);
+        }
+
         if (modeProblem is not null)
         {
             problems?.Add(new Problem(Descriptors.ModeNotAvailable, location, method.Name, modeProblem));
@@ -244,7 +265,7 @@ internal static class ResidualKernelParser
                 + (reconstruction == KernelReconstruction.Linear ? "linear reconstruction" : "its flux takes gradients")
                 + "), so it needs a gradient buffer: add a 'Span<Gradient<" + stateSymbol.Name + ">>' parameter ('Memory<...>' in parallel modes) of one gradient per cell",
             (false, not null) => "gradient buffer '" + gradientBuffer.Name + "' is used only by linear reconstruction or gradient-taking fluxes on unstructured meshes",
-            (true, { IsMemory: false }) when mode != KernelMode.SerialScatter => "in ExecutionMode." + mode + " the gradient buffer '" + gradientBuffer!.Name + "' must be a Memory<Gradient<" + stateSymbol.Name + ">>",
+            (true, { IsMemory: false }) when mode != KernelMode.SerialScatter && !parameters.Any(p => p.Role == ParameterRole.Mode) => "in ExecutionMode." + mode + " the gradient buffer '" + gradientBuffer!.Name + "' must be a Memory<Gradient<" + stateSymbol.Name + ">>",
             _ => null,
         };
         if (gradientProblem is not null)
@@ -267,7 +288,8 @@ internal static class ResidualKernelParser
             mode,
             reconstruction,
             limiter,
-            user);
+            user,
+            new EquatableArray<KernelMode>(runtimeModes));
     }
 
     /// <summary>Finds the user reconstruction <paramref name="name"/> in <paramref name="type"/> and checks its signature.</summary>
@@ -367,6 +389,8 @@ internal static class ResidualKernelParser
                 return (ParameterRole.Tally, null, null, false, null);
             case KnownNames.ParallelOptions:
                 return (ParameterRole.ParallelOptions, null, null, false, null);
+            case KnownNames.ExecutionMode:
+                return (ParameterRole.Mode, null, null, false, null);
             case "System.ReadOnlySpan<T>":
             case "System.ReadOnlyMemory<T>":
             case "System.Span<T>":
@@ -417,7 +441,7 @@ internal static class ResidualKernelParser
     private static string Unknown(IParameterSymbol p) =>
         "parameter '" + p.Name + "' of type " + p.Type.ToDisplayString()
         + " is none of: a mesh (StructuredGrid1D/2D/3D, UnstructuredMesh), the state (ReadOnlySpan or ReadOnlyMemory of the state), the residual (Span or Memory), "
-        + "a [FaceData] face buffer, a gradient buffer (Span or Memory of Gradient<TState>), a BoundaryBinding<Boundary>, a BoundaryFluxTally, ParallelOptions";
+        + "a [FaceData] face buffer, a gradient buffer (Span or Memory of Gradient<TState>), a BoundaryBinding<Boundary>, a BoundaryFluxTally, ParallelOptions, an ExecutionMode";
 
     private static string TypeText(IParameterSymbol p, ParameterRole role, ITypeSymbol? element, string kernelType)
     {
@@ -443,8 +467,10 @@ internal static class ResidualKernelParser
         return p.Type.WithNullableAnnotation(NullableAnnotation.NotAnnotated).ToDisplayString(SymbolDisplayFormat.FullyQualifiedFormat) + nullable;
     }
 
-    private static string? CheckMode(KernelMode mode, MeshKind mesh, List<KernelParameter> parameters)
+    private static string? CheckMode(KernelMode mode, MeshKind mesh, List<KernelParameter> parameters, bool modeChosenAtRunTime)
     {
+        // A kernel whose mode is chosen at run time may carry a face buffer that only its gather path uses.
+        bool strayBuffer = !modeChosenAtRunTime && parameters.Any(p => p.Role == ParameterRole.FaceBuffer);
         if (!Enum.IsDefined(typeof(KernelMode), mode))
         {
             return "execution mode " + (int)mode + " is not a member of FvGen.ExecutionMode";
@@ -452,7 +478,7 @@ internal static class ResidualKernelParser
 
         if (mode == KernelMode.SerialScatter)
         {
-            return parameters.Any(p => p.Role == ParameterRole.FaceBuffer) ? "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather" : null;
+            return strayBuffer ? "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather" : null;
         }
 
         if (mesh == MeshKind.Structured1D || (mesh != MeshKind.Unstructured && mode == KernelMode.ParallelGather))
@@ -472,7 +498,7 @@ internal static class ResidualKernelParser
             return "ExecutionMode.ParallelGather needs a face buffer: add a '[FaceData] Memory<TState>' parameter of at least mesh.FaceCount states (allocate it once per mesh)";
         }
 
-        if (mode != KernelMode.ParallelGather && parameters.Any(p => p.Role == ParameterRole.FaceBuffer))
+        if (mode != KernelMode.ParallelGather && strayBuffer)
         {
             return "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather";
         }
@@ -552,6 +578,7 @@ internal static class ResidualKernelParser
         ParameterRole.Tally => "boundary flux tally",
         ParameterRole.ParallelOptions => "ParallelOptions",
         ParameterRole.GradientBuffer => "gradient buffer",
+        ParameterRole.Mode => "ExecutionMode",
         _ => "face buffer",
     };
 

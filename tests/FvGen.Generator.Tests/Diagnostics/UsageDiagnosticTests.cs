@@ -47,6 +47,7 @@ public sealed class UsageDiagnosticTests
         { "FVG0010", "[ConservedState] public partial struct Other { public double Q; }\npublic static partial class P {\n" + Flux + "\n[ResidualKernel(nameof(Central))] public static partial void Mixed(StructuredGrid1D grid, ReadOnlySpan<Other> u, Span<Other> r); }", "Mixed" },
         { "FVG0011", "public static partial class P {\n" + Flux + "\n[ResidualKernel(nameof(Central), Mode = ExecutionMode.ParallelGather)] public static partial void Fast(StructuredGrid2D grid, ReadOnlySpan<Heat> u, Span<Heat> r); }", "Fast" },
         { "FVG0011", "public static partial class P {\n" + Flux + "\n[ResidualKernel(nameof(Central), Mode = ExecutionMode.ParallelColouredScatter)] public static partial void Spans(UnstructuredMesh mesh, ReadOnlySpan<Heat> u, Span<Heat> r); }", "Spans" },
+        { "FVG0011", "public static partial class P {\n" + Flux + "\n[ResidualKernel(nameof(Central), Mode = ExecutionMode.SerialScatter)] public static partial void Twice(StructuredGrid1D grid, ReadOnlySpan<Heat> u, Span<Heat> r, ExecutionMode mode); }", "Twice" },
         { "FVG0012", "public static class Closed {\n" + Flux + "\n[ResidualKernel(nameof(Central))] public static partial void Shut(StructuredGrid1D grid, ReadOnlySpan<Heat> u, Span<Heat> r); }", "Shut" },
     };
 

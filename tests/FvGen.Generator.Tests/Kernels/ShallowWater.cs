@@ -117,6 +117,21 @@ public static partial class ShallowWater
         BoundaryFluxTally? tally,
         ParallelOptions options);
 
+    /// <summary>The mode chosen by the caller at run time.</summary>
+    [ResidualKernel(nameof(Rusanov))]
+    public static partial void AnyMode(
+        UnstructuredMesh mesh,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options,
+        ExecutionMode mode);
+
+    [ResidualKernel(nameof(Rusanov))]
+    public static partial void AnyMode1D(StructuredGrid1D grid, ReadOnlySpan<WaterState> state, Span<WaterState> residual, BoundaryBinding<Boundary> boundaries, ExecutionMode mode);
+
     [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelColouredScatter)]
     public static partial void Coloured(
         UnstructuredMesh mesh,
