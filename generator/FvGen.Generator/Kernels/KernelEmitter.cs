@@ -134,6 +134,11 @@ internal static class KernelEmitter
         w.Line("int cellCount = mesh.CellCount;");
         LengthCheck(w, KernelNames.Of(state) + ".Length", "cellCount", state.Name, "cells", kernel);
         LengthCheck(w, KernelNames.Of(residual) + ".Length", "cellCount", residual.Name, "cells", kernel);
+        if (KernelNames.Find(model, ParameterRole.GradientBuffer) is { } gradients)
+        {
+            LengthCheck(w, KernelNames.Of(gradients) + ".Length", "cellCount", gradients.Name, "gradients", kernel);
+        }
+
         if (buffer is not null && model.Mode == KernelMode.ParallelGather)
         {
             w.Line("if (faceFluxMemory.Length < mesh.FaceCount)");

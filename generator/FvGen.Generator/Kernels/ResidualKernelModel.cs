@@ -41,8 +41,11 @@ internal sealed record ResidualKernelModel(
     FluxCall? UserReconstruction = null,
     EquatableArray<KernelMode> RuntimeModes = default)
 {
-    /// <summary>True when the kernel computes Green–Gauss cell gradients first (linear reconstruction or a diffusion flux on an unstructured mesh).</summary>
-    public bool NeedsGradients => Mesh == MeshKind.Unstructured && (Reconstruction == KernelReconstruction.Linear || Flux.TakesGradients);
+    /// <summary>
+    /// True when the kernel computes Green–Gauss cell gradients first: for a flux that takes gradients
+    /// (any mesh), or for linear reconstruction on an unstructured mesh.
+    /// </summary>
+    public bool NeedsGradients => Flux.TakesGradients || (Mesh == MeshKind.Unstructured && Reconstruction == KernelReconstruction.Linear);
 }
 
 /// <summary>One parameter of a kernel.</summary>

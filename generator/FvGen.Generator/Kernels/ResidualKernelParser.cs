@@ -230,7 +230,7 @@ internal static class ResidualKernelParser
             return null;
         }
 
-        string? reconstructionProblem = CheckReconstruction(reconstruction, limiter, mesh.Value, flux.Value.Call);
+        string? reconstructionProblem = CheckReconstruction(reconstruction, limiter, mesh.Value);
         if (reconstructionProblem is not null)
         {
             problems?.Add(new Problem(Descriptors.ReconstructionNotAvailable, location, method.Name, reconstructionProblem));
@@ -257,14 +257,14 @@ internal static class ResidualKernelParser
             }
         }
 
-        bool needsGradients = mesh.Value == MeshKind.Unstructured && (reconstruction == KernelReconstruction.Linear || flux.Value.Call.TakesGradients);
+        bool needsGradients = flux.Value.Call.TakesGradients || (mesh.Value == MeshKind.Unstructured && reconstruction == KernelReconstruction.Linear);
         var gradientBuffer = parameters.FirstOrDefault(p => p.Role == ParameterRole.GradientBuffer);
         string? gradientProblem = (needsGradients, gradientBuffer) switch
         {
             (true, null) => "it computes Green-Gauss cell gradients ("
                 + (reconstruction == KernelReconstruction.Linear ? "linear reconstruction" : "its flux takes gradients")
                 + "), so it needs a gradient buffer: add a 'Span<Gradient<" + stateSymbol.Name + ">>' parameter ('Memory<...>' in parallel modes) of one gradient per cell",
-            (false, not null) => "gradient buffer '" + gradientBuffer.Name + "' is used only by linear reconstruction or gradient-taking fluxes on unstructured meshes",
+            (false, not null) => "gradient buffer '" + gradientBuffer.Name + "' is used only by fluxes that take gradients, and by linear reconstruction on unstructured meshes",
             (true, { IsMemory: false }) when mode != KernelMode.SerialScatter && !parameters.Any(p => p.Role == ParameterRole.Mode) => "in ExecutionMode." + mode + " the gradient buffer '" + gradientBuffer!.Name + "' must be a Memory<Gradient<" + stateSymbol.Name + ">>",
             _ => null,
         };
@@ -506,12 +506,8 @@ internal static class ResidualKernelParser
         return null;
     }
 
-    private static string? CheckReconstruction(KernelReconstruction reconstruction, KernelLimiter limiter, MeshKind mesh, FluxCall flux)
+    private static string? CheckReconstruction(KernelReconstruction reconstruction, KernelLimiter limiter, MeshKind mesh)
     {
-        if (flux.TakesGradients && mesh != MeshKind.Unstructured)
-        {
-            return "numerical flux '" + flux.Name + "' takes cell gradients, which this version generates on unstructured meshes only; on structured grids use the two-point difference over face.CentreDistance";
-        }
 
         if (!Enum.IsDefined(typeof(KernelReconstruction), reconstruction))
         {

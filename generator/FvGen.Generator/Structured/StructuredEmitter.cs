@@ -39,6 +39,16 @@ internal static class StructuredEmitter
         }
 
         DeclareAxes(w, model, dim);
+        if (model.NeedsGradients)
+        {
+            if (KernelNames.Find(model, ParameterRole.GradientBuffer)!.IsMemory)
+            {
+                w.Line("global::System.Span<global::FvGen.Geometry.Gradient<" + model.State.FullyQualifiedName + ">> gradients = gradientMemory.Span;");
+            }
+
+            StructuredGradientEmitter.Emit(w, model, dim);
+        }
+
         w.Line("residual.Clear();");
         if (model.Reconstruction == KernelReconstruction.Linear)
         {
@@ -53,7 +63,8 @@ internal static class StructuredEmitter
             {
                 int slab = SlabAxis(dim, d);
                 w.Line("// " + Axis[d] + " faces, interior: one parallel task per " + Axis[slab] + " slab; the faces of a slab touch only its own cells.");
-                w.Line("global::System.Threading.Tasks.Parallel.For(0, " + Count[slab] + ", options, slab => Interior" + Axis[d].ToUpperInvariant() + "(mesh, stateMemory.Span, residualMemory.Span, slab));");
+                w.Line("global::System.Threading.Tasks.Parallel.For(0, " + Count[slab] + ", options, slab => Interior" + Axis[d].ToUpperInvariant()
+                    + "(mesh, stateMemory.Span, residualMemory.Span, " + (model.NeedsGradients ? "gradientMemory.Span, " : "") + "slab));");
             }
             else
             {
@@ -87,7 +98,8 @@ internal static class StructuredEmitter
         {
             w.Line();
             w.Open("static void Interior" + Axis[d].ToUpperInvariant() + "(" + model.Parameters.First(p => p.Role == ParameterRole.Mesh).TypeText
-                + " mesh, global::System.ReadOnlySpan<" + s + "> state, global::System.Span<" + s + "> residual, int slab)");
+                + " mesh, global::System.ReadOnlySpan<" + s + "> state, global::System.Span<" + s + "> residual, "
+                + (model.NeedsGradients ? "global::System.ReadOnlySpan<global::FvGen.Geometry.Gradient<" + s + ">> gradients, " : "") + "int slab)");
             DeclareAxes(w, model, dim);
             Interior(w, model, dim, d, SlabAxis(dim, d));
             w.Close();

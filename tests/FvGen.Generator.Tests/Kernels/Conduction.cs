@@ -2,6 +2,7 @@ using FvGen;
 using FvGen.Boundaries;
 using FvGen.Geometry;
 using FvGen.Ledger;
+using FvGen.Meshes.Structured;
 using FvGen.Meshes.Unstructured;
 
 namespace FvGen.Generator.Tests.Kernels;
@@ -34,6 +35,16 @@ public static partial class Conduction
 
     [ResidualKernel(nameof(Fourier))]
     public static partial void Serial(UnstructuredMesh mesh, ReadOnlySpan<Scalar> temperature, Span<Scalar> rate, Span<Gradient<Scalar>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Fourier))]
+    public static partial void Grid2D(StructuredGrid2D grid, ReadOnlySpan<Scalar> temperature, Span<Scalar> rate, Span<Gradient<Scalar>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Fourier), Mode = ExecutionMode.ParallelColouredScatter)]
+    public static partial void GridSlabs3D(
+        StructuredGrid3D grid, ReadOnlyMemory<Scalar> temperature, Memory<Scalar> rate, Memory<Gradient<Scalar>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
+    [ResidualKernel(nameof(Fourier))]
+    public static partial void Grid3D(StructuredGrid3D grid, ReadOnlySpan<Scalar> temperature, Span<Scalar> rate, Span<Gradient<Scalar>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
     [ResidualKernel(nameof(Fourier), Mode = ExecutionMode.ParallelGather)]
     public static partial void Gather(
