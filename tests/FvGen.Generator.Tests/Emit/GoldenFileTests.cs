@@ -26,6 +26,13 @@ public sealed class GoldenFileTests
             ("Demo.Conduction.Residual.Residual.g.cs", "Conduction.Residual.g.cs.txt"));
 
     [Fact]
+    public Task PeriodicMusclKernelWithoutBoundaries() =>
+        Verify(
+            [Samples.Scalar, Samples.Muscl1D],
+            ("Demo.Heat.ConservedState.g.cs", "Heat.ConservedState.g.cs.txt"),
+            ("Demo.Ring.Residual.Residual.g.cs", "Ring.Residual.g.cs.txt"));
+
+    [Fact]
     public Task UnstructuredGatherKernel() =>
         Verify(
             [Samples.Scalar, Samples.ConductionUnstructured],

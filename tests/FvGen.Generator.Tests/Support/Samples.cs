@@ -84,6 +84,25 @@ internal static class Samples
         }
         """;
 
+    public const string Muscl1D = """
+        using System;
+        using FvGen;
+        using FvGen.Geometry;
+        using FvGen.Meshes.Structured;
+
+        namespace Demo;
+
+        public static partial class Ring
+        {
+            [NumericalFlux]
+            public static Heat Upwind(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = face.Normal.X >= 0 ? face.Normal.X * left.Energy : face.Normal.X * right.Energy };
+
+            [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.VanLeer)]
+            public static partial void Residual(StructuredGrid1D grid, ReadOnlySpan<Heat> state, Span<Heat> rate);
+        }
+        """;
+
     /// <summary>A second, independent kernel in a file of its own (for caching tests).</summary>
     public const string Other = """
         using System;
