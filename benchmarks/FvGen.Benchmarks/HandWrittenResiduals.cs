@@ -141,4 +141,149 @@ public static class HandWrittenResiduals
             }
         });
     }
+
+    /// <summary>2-D grid with walls on all four sides; interior faces of each direction in parallel by rows (x) and columns (y).</summary>
+    public static void StructuredSlabs(StructuredGrid2D grid, Water[] u, Water[] r, ParallelOptions options)
+    {
+        int nx = grid.Nx, ny = grid.Ny;
+        Array.Clear(r);
+        Parallel.For(0, ny, options, j =>
+        {
+            ReadOnlySpan<double> xn = grid.X.Nodes, xc = grid.X.Centres, yc = grid.Y.Centres, dy = grid.Y.Widths;
+            int row = nx * j;
+            for (int i = 1; i < nx; i++)
+            {
+                var face = new FaceGeometry(new Vec3(1, 0, 0), dy[j], new Vec3(xn[i], yc[j], 0), xc[i] - xc[i - 1]);
+                Water f = ShallowWaterPhysics.Rusanov(in u[row + i - 1], in u[row + i], in face) * dy[j];
+                r[row + i - 1] -= f;
+                r[row + i] += f;
+            }
+        });
+        {
+            ReadOnlySpan<double> xn = grid.X.Nodes, yc = grid.Y.Centres, dx = grid.X.Widths, dy = grid.Y.Widths;
+            for (int j = 0; j < ny; j++)
+            {
+                int row = nx * j;
+                var west = new FaceGeometry(new Vec3(-1, 0, 0), dy[j], new Vec3(xn[0], yc[j], 0), 0.5 * dx[0]);
+                r[row] -= ShallowWaterPhysics.Wall(in u[row], in west) * dy[j];
+                var east = new FaceGeometry(new Vec3(1, 0, 0), dy[j], new Vec3(xn[nx], yc[j], 0), 0.5 * dx[nx - 1]);
+                r[row + nx - 1] -= ShallowWaterPhysics.Wall(in u[row + nx - 1], in east) * dy[j];
+            }
+        }
+
+        Parallel.For(0, nx, options, i =>
+        {
+            ReadOnlySpan<double> xc = grid.X.Centres, yn = grid.Y.Nodes, yc = grid.Y.Centres, dx = grid.X.Widths;
+            for (int j = 1; j < ny; j++)
+            {
+                int c = i + nx * j;
+                var face = new FaceGeometry(new Vec3(0, 1, 0), dx[i], new Vec3(xc[i], yn[j], 0), yc[j] - yc[j - 1]);
+                Water f = ShallowWaterPhysics.Rusanov(in u[c - nx], in u[c], in face) * dx[i];
+                r[c - nx] -= f;
+                r[c] += f;
+            }
+        });
+        {
+            ReadOnlySpan<double> xc = grid.X.Centres, yn = grid.Y.Nodes, dx = grid.X.Widths, dy = grid.Y.Widths;
+            for (int i = 0; i < nx; i++)
+            {
+                var south = new FaceGeometry(new Vec3(0, -1, 0), dx[i], new Vec3(xc[i], yn[0], 0), 0.5 * dy[0]);
+                r[i] -= ShallowWaterPhysics.Wall(in u[i], in south) * dx[i];
+                int top = i + nx * (ny - 1);
+                var north = new FaceGeometry(new Vec3(0, 1, 0), dx[i], new Vec3(xc[i], yn[ny], 0), 0.5 * dy[ny - 1]);
+                r[top] -= ShallowWaterPhysics.Wall(in u[top], in north) * dx[i];
+            }
+        }
+
+        var volumes = grid.CellVolumes;
+        for (int c = 0; c < r.Length; c++)
+        {
+            r[c] = r[c] / volumes[c];
+        }
+    }
+
+    /// <summary>1-D periodic MUSCL with the van Leer limiter (LeVeque 2002, ch. 6), component by component.</summary>
+    public static void Muscl1D(StructuredGrid1D grid, ReadOnlySpan<Water> u, Span<Water> r)
+    {
+        int n = grid.Nx;
+        ReadOnlySpan<double> xn = grid.X.Nodes, xc = grid.X.Centres, dx = grid.X.Widths;
+        r.Clear();
+        for (int f = 0; f < n; f++)
+        {
+            // Face f lies between cells f - 1 and f (periodic: face 0 joins the last cell and the first).
+            int left = f == 0 ? n - 1 : f - 1, right = f;
+            int leftLeft = left == 0 ? n - 1 : left - 1, rightRight = right == n - 1 ? 0 : right + 1;
+            Water a = u[leftLeft], b = u[left], c = u[right], d = u[rightRight];
+            Water lf = b, rf = c;
+            lf.Depth += 0.5 * VanLeer(b.Depth - a.Depth, c.Depth - b.Depth);
+            lf.Flow.X += 0.5 * VanLeer(b.Flow.X - a.Flow.X, c.Flow.X - b.Flow.X);
+            lf.Flow.Y += 0.5 * VanLeer(b.Flow.Y - a.Flow.Y, c.Flow.Y - b.Flow.Y);
+            rf.Depth -= 0.5 * VanLeer(c.Depth - b.Depth, d.Depth - c.Depth);
+            rf.Flow.X -= 0.5 * VanLeer(c.Flow.X - b.Flow.X, d.Flow.X - c.Flow.X);
+            rf.Flow.Y -= 0.5 * VanLeer(c.Flow.Y - b.Flow.Y, d.Flow.Y - c.Flow.Y);
+            double distance = f == 0 ? 0.5 * (dx[n - 1] + dx[0]) : xc[f] - xc[f - 1];
+            var face = new FaceGeometry(new Vec3(1, 0, 0), 1.0, new Vec3(xn[f], 0, 0), distance);
+            Water flux = ShallowWaterPhysics.Rusanov(in lf, in rf, in face);
+            r[left] -= flux;
+            r[right] += flux;
+        }
+
+        for (int i = 0; i < n; i++)
+        {
+            r[i] = r[i] / dx[i];
+        }
+    }
+
+    private static double VanLeer(double backward, double forward)
+    {
+        if (backward * forward <= 0.0)
+        {
+            return 0.0;
+        }
+
+        double theta = forward / backward;
+        return (theta + Math.Abs(theta)) / (1.0 + Math.Abs(theta)) * backward;
+    }
+
+    /// <summary>Unstructured mesh, interior faces colour by colour in parallel, walls on every patch.</summary>
+    public static void UnstructuredColoured(UnstructuredMesh mesh, Water[] u, Water[] r, ParallelOptions options)
+    {
+        Array.Clear(r);
+        var colouring = mesh.FaceColouring;
+        const int Chunk = 2048;
+        for (int colour = 0; colour < colouring.ColourCount; colour++)
+        {
+            int first = colouring.ColourOffsets[colour], last = colouring.ColourOffsets[colour + 1];
+            Parallel.For(0, (last - first + Chunk - 1) / Chunk, options, chunk =>
+            {
+                ReadOnlySpan<int> faces = colouring.Faces, left = mesh.FaceLeft, right = mesh.FaceRight;
+                ReadOnlySpan<Vec3> normals = mesh.FaceNormals, centroids = mesh.FaceCentroids;
+                ReadOnlySpan<double> areas = mesh.FaceAreas, distances = mesh.FaceCentreDistances;
+                int end = Math.Min(last, first + (chunk + 1) * Chunk);
+                for (int n = first + chunk * Chunk; n < end; n++)
+                {
+                    int f = faces[n];
+                    var face = new FaceGeometry(normals[f], areas[f], centroids[f], distances[f]);
+                    Water flux = ShallowWaterPhysics.Rusanov(in u[left[f]], in u[right[f]], in face) * areas[f];
+                    r[left[f]] -= flux;
+                    r[right[f]] += flux;
+                }
+            });
+        }
+
+        ReadOnlySpan<int> owner = mesh.FaceLeft;
+        ReadOnlySpan<Vec3> faceNormals = mesh.FaceNormals, faceCentroids = mesh.FaceCentroids;
+        ReadOnlySpan<double> faceAreas = mesh.FaceAreas, faceDistances = mesh.FaceCentreDistances;
+        for (int f = mesh.InteriorFaceCount; f < owner.Length; f++)
+        {
+            var face = new FaceGeometry(faceNormals[f], faceAreas[f], faceCentroids[f], faceDistances[f]);
+            r[owner[f]] -= ShallowWaterPhysics.Wall(in u[owner[f]], in face) * faceAreas[f];
+        }
+
+        var volumes = mesh.CellVolumes;
+        for (int c = 0; c < r.Length; c++)
+        {
+            r[c] = r[c] / volumes[c];
+        }
+    }
 }

@@ -12,6 +12,8 @@ namespace FvGen.Benchmarks;
 public class ResidualBenchmarks
 {
     private StructuredGrid2D _grid = null!;
+    private StructuredGrid1D _ring = null!;
+    private Water[] _ringState = null!, _ringResidual = null!;
     private UnstructuredMesh _mesh = null!;
     private Water[] _gridState = null!, _gridResidual = null!;
     private Water[] _meshState = null!, _meshResidual = null!, _faceFlux = null!;
@@ -29,6 +31,10 @@ public class ResidualBenchmarks
         _gridResidual = new Water[_grid.CellCount];
         _gridWalls = new BoundaryBinding<ShallowWaterPhysics.Boundary>().Bind("walls", ShallowWaterPhysics.Boundary.Wall);
 
+        _ring = new StructuredGrid1D(GridAxis.Uniform(65536, 0, 1), SideBoundary.Periodic, SideBoundary.Periodic);
+        _ringState = RandomWater(random, _ring.CellCount);
+        _ringResidual = new Water[_ring.CellCount];
+
         var builder = RectangleMesh.CreateBuilder(160, 160, 0, 1, 0, 1, RectangleCellKind.Triangles);
         NodePerturbation.PerturbInteriorNodes(builder, 0.2, 3);
         _mesh = builder.Build();
@@ -45,6 +51,9 @@ public class ResidualBenchmarks
         Agree("structured", HandWrittenStructured, GeneratedStructured, _gridResidual);
         Agree("unstructured", HandWrittenUnstructured, GeneratedUnstructured, _meshResidual);
         Agree("gather", HandWrittenGather, GeneratedGather, _meshResidual);
+        Agree("structured slabs", HandWrittenStructuredSlabs, GeneratedStructuredSlabs, _gridResidual);
+        Agree("MUSCL", HandWrittenMuscl1D, GeneratedMuscl1D, _ringResidual);
+        Agree("coloured", HandWrittenColoured, GeneratedColoured, _meshResidual);
     }
 
     private static void Agree(string what, Action handWritten, Action generated, Water[] residual)
@@ -80,6 +89,24 @@ public class ResidualBenchmarks
 
     [Benchmark, BenchmarkCategory("Unstructured triangles, 51 200 cells, gather, 2 threads")]
     public void GeneratedGather() => ShallowWaterPhysics.UnstructuredGather(_mesh, _meshState, _meshResidual, _faceFlux, _meshWalls, _twoThreads);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Structured 2-D, 256x256, slabs, 2 threads")]
+    public void HandWrittenStructuredSlabs() => HandWrittenResiduals.StructuredSlabs(_grid, _gridState, _gridResidual, _twoThreads);
+
+    [Benchmark, BenchmarkCategory("Structured 2-D, 256x256, slabs, 2 threads")]
+    public void GeneratedStructuredSlabs() => ShallowWaterPhysics.StructuredSlabs(_grid, _gridState, _gridResidual, _gridWalls, _twoThreads);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Structured 1-D, 65 536 cells, MUSCL van Leer, serial")]
+    public void HandWrittenMuscl1D() => HandWrittenResiduals.Muscl1D(_ring, _ringState, _ringResidual);
+
+    [Benchmark, BenchmarkCategory("Structured 1-D, 65 536 cells, MUSCL van Leer, serial")]
+    public void GeneratedMuscl1D() => ShallowWaterPhysics.Muscl1D(_ring, _ringState, _ringResidual);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Unstructured triangles, 51 200 cells, coloured, 2 threads")]
+    public void HandWrittenColoured() => HandWrittenResiduals.UnstructuredColoured(_mesh, _meshState, _meshResidual, _twoThreads);
+
+    [Benchmark, BenchmarkCategory("Unstructured triangles, 51 200 cells, coloured, 2 threads")]
+    public void GeneratedColoured() => ShallowWaterPhysics.UnstructuredColoured(_mesh, _meshState, _meshResidual, _meshWalls, _twoThreads);
 
     private static Water[] RandomWater(Random random, int count)
     {

@@ -68,6 +68,15 @@ public static partial class ShallowWaterPhysics
     [ResidualKernel(nameof(Rusanov))]
     public static partial void Unstructured(UnstructuredMesh mesh, ReadOnlySpan<Water> state, Span<Water> residual, BoundaryBinding<Boundary> boundaries);
 
+    [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelColouredScatter)]
+    public static partial void StructuredSlabs(StructuredGrid2D grid, ReadOnlyMemory<Water> state, Memory<Water> residual, BoundaryBinding<Boundary> boundaries, ParallelOptions options);
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.VanLeer)]
+    public static partial void Muscl1D(StructuredGrid1D grid, ReadOnlySpan<Water> state, Span<Water> residual);
+
+    [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelColouredScatter)]
+    public static partial void UnstructuredColoured(UnstructuredMesh mesh, ReadOnlyMemory<Water> state, Memory<Water> residual, BoundaryBinding<Boundary> boundaries, ParallelOptions options);
+
     [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelGather)]
     public static partial void UnstructuredGather(
         UnstructuredMesh mesh, ReadOnlyMemory<Water> state, Memory<Water> residual, [FaceData] Memory<Water> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);

@@ -62,13 +62,14 @@ internal static class MusclEmitter
             return;
         }
 
-        w.Line("ref readonly " + s + " uL = ref state[" + left + "];");
-        w.Line("ref readonly " + s + " uR = ref state[" + right + "];");
+        // Copies, not refs: the JIT keeps the components of small struct locals in registers.
+        w.Line(s + " uL = state[" + left + "];");
+        w.Line(s + " uR = state[" + right + "];");
         w.Line(s + " leftFace = uL;");
         w.Line(s + " rightFace = uR;");
         w.Line("if (leftLeft >= 0)");
         w.Open();
-        w.Line("ref readonly " + s + " uLL = ref state[leftLeft];");
+        w.Line(s + " uLL = state[leftLeft];");
         foreach (var c in model.State.Components)
         {
             w.Line("leftFace." + c.Access + " += 0.5 * LimitedSlope(uL." + c.Access + " - uLL." + c.Access + ", uR." + c.Access + " - uL." + c.Access + ");");
@@ -77,7 +78,7 @@ internal static class MusclEmitter
         w.Close();
         w.Line("if (rightRight >= 0)");
         w.Open();
-        w.Line("ref readonly " + s + " uRR = ref state[rightRight];");
+        w.Line(s + " uRR = state[rightRight];");
         foreach (var c in model.State.Components)
         {
             w.Line("rightFace." + c.Access + " -= 0.5 * LimitedSlope(uR." + c.Access + " - uL." + c.Access + ", uRR." + c.Access + " - uR." + c.Access + ");");
