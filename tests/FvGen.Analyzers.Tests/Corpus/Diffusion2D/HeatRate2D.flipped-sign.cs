@@ -1,5 +1,5 @@
 // expect: FVC0002
-// why: the west difference is added, so the class T[•,•] collects diffusivity/dx²·(1 - 2 - 1) instead of 0.
+// why: the west neighbour enters the x-part with a minus sign, so the class T[•,•] collects diffusivity/dx²·(1 - 1 - 1 - 1) instead of 0.
 using System;
 
 namespace Corpus.Diffusion2D;
@@ -15,7 +15,7 @@ public static class PlateConduction
         {
             for (int j = 1; j < ny - 1; j++)
             {
-                double xPart = ((T[i + 1, j] - T[i, j]) + (T[i, j] - T[i - 1, j])) / (dx * dx);
+                double xPart = ((T[i + 1, j] - T[i, j]) - (T[i, j] + T[i - 1, j])) / (dx * dx);
                 double yPart = ((T[i, j + 1] - T[i, j]) - (T[i, j] - T[i, j - 1])) / (dy * dy);
                 rate[i, j] = diffusivity * (xPart + yPart);
             }

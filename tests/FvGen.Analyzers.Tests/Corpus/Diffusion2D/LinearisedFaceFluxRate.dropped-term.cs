@@ -25,7 +25,7 @@ public static class LakePlumeRate
                 double east = qx[j * (nx + 1) + i + 1];
                 double south = qy[j * nx + i];
                 double north = qy[(j + 1) * nx + i];
-                rate[j * nx + i] = (west - east) / dx + -north / dy;
+                rate[j * nx + i] = (west - east) / dx - north / dy;
             }
         }
     }
