@@ -7,17 +7,17 @@ using Microsoft.CodeAnalysis.CSharp.Syntax;
 namespace FvGen.Analyzers.Tests;
 
 /// <summary>
-/// Keeps the conservation corpus (Corpus/README.md) honest before any analyzer is held to it:
+/// Keeps the conservation corpus (IndependentCorpus/README.md) honest before any analyzer is held to it:
 /// every kernel compiles on its own against the BCL and the FvGen runtime, carries a valid
 /// expectation header, and every conservative original comes with its mutants.
 /// </summary>
-public sealed partial class CorpusCompilesTests
+public sealed partial class IndependentCorpusCompilesTests
 {
     /// <summary>The rule IDs of the analyzers issue (FVC0001–FVC0006, FVC0100).</summary>
     private static readonly ImmutableHashSet<string> KnownRuleIds = ImmutableHashSet.Create(
         "FVC0001", "FVC0002", "FVC0003", "FVC0004", "FVC0005", "FVC0006", "FVC0100");
 
-    private static readonly string CorpusRoot = Path.Combine(AppContext.BaseDirectory, "Corpus");
+    private static readonly string CorpusRoot = Path.Combine(AppContext.BaseDirectory, "IndependentCorpus");
 
     private static readonly Lazy<ImmutableArray<MetadataReference>> References = new(() =>
         Basic.Reference.Assemblies.Net100.References.All
@@ -175,7 +175,7 @@ public sealed partial class CorpusCompilesTests
     {
         if (!Directory.Exists(CorpusRoot))
         {
-            throw new DirectoryNotFoundException($"No corpus at {CorpusRoot}; the test project must copy Corpus/**/*.cs to its output.");
+            throw new DirectoryNotFoundException($"No corpus at {CorpusRoot}; the test project must copy IndependentCorpus/**/*.cs to its output.");
         }
 
         return Directory.EnumerateFiles(CorpusRoot, "*.cs", SearchOption.AllDirectories).Order(StringComparer.Ordinal);
