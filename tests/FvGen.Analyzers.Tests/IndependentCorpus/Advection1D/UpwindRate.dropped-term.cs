@@ -1,0 +1,19 @@
+// expect: FVC0001
+// why: the outflow term -velocity*dye[i]/dx was dropped, so the inflow velocity*dye[i-1]/dx enters cell i with no cell losing it.
+using System;
+
+namespace Corpus.Advection1D;
+
+/// <summary>Dye carried down a straight flume at a steady positive velocity; first-order upwind rate.</summary>
+public static class DyeFlumeUpwind
+{
+    [FvGen.ConservativeUpdate]
+    public static void Rate(double[] dye, double[] rate, double velocity, double dx)
+    {
+        // Cell 0 is an inflow ghost; the rate of the interior cells only.
+        for (int i = 1; i < dye.Length; i++)
+        {
+            rate[i] = velocity * dye[i - 1] / dx;
+        }
+    }
+}

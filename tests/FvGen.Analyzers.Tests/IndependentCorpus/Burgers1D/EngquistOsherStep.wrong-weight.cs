@@ -1,0 +1,27 @@
+// expect: FVC0002
+// why: the backward piece of the west face lost its 1/2, so the class Min(u[•],0)² collects -dt/(2dx) + dt/dx instead of cancelling.
+using System;
+
+namespace Corpus.Burgers1D;
+
+/// <summary>Explicit Burgers step with the Engquist-Osher flux split, f+(u) = max(u,0)²/2, f-(u) = min(u,0)²/2.</summary>
+public static class BurgersEngquistOsher
+{
+    [FvGen.ConservativeUpdate]
+    public static void Advance(double[] u, double[] next, double dt, double dx)
+    {
+        double lambda = dt / dx;
+        for (int i = 1; i < u.Length - 1; i++)
+        {
+            double forwardHere = Math.Max(u[i], 0.0);
+            double forwardWest = Math.Max(u[i - 1], 0.0);
+            double backwardHere = Math.Min(u[i], 0.0);
+            double backwardEast = Math.Min(u[i + 1], 0.0);
+
+            // F(i+1/2) = f+(u[i]) + f-(u[i+1]);  F(i-1/2) = f+(u[i-1]) + f-(u[i]).
+            double eastFace = 0.5 * forwardHere * forwardHere + 0.5 * backwardEast * backwardEast;
+            double westFace = 0.5 * forwardWest * forwardWest + backwardHere * backwardHere;
+            next[i] = u[i] - lambda * (eastFace - westFace);
+        }
+    }
+}

@@ -1,0 +1,24 @@
+// expect: FVC0002
+// why: the y-part lost one -T[i, j] while the other members of its class remain, so the class T[•,•] collects +diffusivity/dy² instead of 0.
+using System;
+
+namespace Corpus.Diffusion2D;
+
+/// <summary>Heat conduction rate in a rectangular aluminium plate with a uniform conductivity.</summary>
+public static class PlateConduction
+{
+    [FvGen.ConservativeUpdate]
+    public static void Rate(double[,] T, double[,] rate, double diffusivity, double dx, double dy)
+    {
+        int nx = T.GetLength(0), ny = T.GetLength(1);
+        for (int i = 1; i < nx - 1; i++)
+        {
+            for (int j = 1; j < ny - 1; j++)
+            {
+                double xPart = ((T[i + 1, j] - T[i, j]) - (T[i, j] - T[i - 1, j])) / (dx * dx);
+                double yPart = ((T[i, j + 1] - T[i, j]) + T[i, j - 1]) / (dy * dy);
+                rate[i, j] = diffusivity * (xPart + yPart);
+            }
+        }
+    }
+}

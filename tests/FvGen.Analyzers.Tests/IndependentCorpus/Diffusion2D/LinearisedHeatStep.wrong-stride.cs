@@ -1,0 +1,24 @@
+// expect: FVC0001 FVC0002
+// why: the south neighbour is read at c - ny instead of c - nx; -ny is no lattice shift of j*nx + i, so T[c - ny] has no counterpart and the old-state class T[c + ...] now sums to 1 - ry.
+using System;
+
+namespace Corpus.Diffusion2D;
+
+/// <summary>Explicit heat step on a row-major grid (index j*nx + i), e.g. a chip spreader plate.</summary>
+public static class SpreaderPlateStep
+{
+    [FvGen.ConservativeUpdate]
+    public static void Advance(double[] T, double[] next, int nx, int ny, double rx, double ry)
+    {
+        for (int j = 1; j < ny - 1; j++)
+        {
+            for (int i = 1; i < nx - 1; i++)
+            {
+                int c = j * nx + i;
+                next[c] = T[c]
+                    + rx * (T[c + 1] - 2.0 * T[c] + T[c - 1])
+                    + ry * (T[c + nx] - 2.0 * T[c] + T[c - ny]);
+            }
+        }
+    }
+}

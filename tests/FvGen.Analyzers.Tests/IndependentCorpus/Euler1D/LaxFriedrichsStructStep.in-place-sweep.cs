@@ -1,0 +1,42 @@
+// expect: FVC0005
+// why: the step writes u[i] in an ascending loop, so cell i reads u[i - 1] after it was advanced and the two sides of face i-1/2 use different states.
+using System;
+
+namespace Corpus.Euler1D;
+
+public struct ChamberGas
+{
+    public double Density;
+    public double Momentum;
+    public double Energy;
+}
+
+/// <summary>Lax-Friedrichs step for gas venting from a pressurised chamber into a duct.</summary>
+public static class ChamberVentingLaxFriedrichs
+{
+    private const double Gamma = 1.4;
+
+    private static ChamberGas Flux(in ChamberGas s)
+    {
+        double velocity = s.Momentum / s.Density;
+        double pressure = (Gamma - 1.0) * (s.Energy - 0.5 * s.Momentum * velocity);
+        return new ChamberGas
+        {
+            Density = s.Momentum,
+            Momentum = s.Momentum * velocity + pressure,
+            Energy = (s.Energy + pressure) * velocity,
+        };
+    }
+
+    [FvGen.ConservativeUpdate]
+    public static void Advance(ChamberGas[] u, ChamberGas[] next, double dt, double dx)
+    {
+        double halfRatio = 0.5 * dt / dx;
+        for (int i = 1; i < u.Length - 1; i++)
+        {
+            u[i].Density = 0.5 * (u[i - 1].Density + u[i + 1].Density) - halfRatio * (Flux(u[i + 1]).Density - Flux(u[i - 1]).Density);
+            u[i].Momentum = 0.5 * (u[i - 1].Momentum + u[i + 1].Momentum) - halfRatio * (Flux(u[i + 1]).Momentum - Flux(u[i - 1]).Momentum);
+            u[i].Energy = 0.5 * (u[i - 1].Energy + u[i + 1].Energy) - halfRatio * (Flux(u[i + 1]).Energy - Flux(u[i - 1]).Energy);
+        }
+    }
+}

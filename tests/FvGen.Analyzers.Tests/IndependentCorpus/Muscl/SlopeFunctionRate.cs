@@ -1,0 +1,35 @@
+// expect: none
+// why: the limiter call LimitedSlope(u[•-1], u[•], u[•+1]) feeds both face states, and the flux at face i+1/2 is the one at face i-1/2 shifted by a cell, so the class cancels.
+using System;
+
+namespace Corpus.Muscl;
+
+/// <summary>Second-order rate of a polymer concentration in a mixing tube, van Albada slope from a helper.</summary>
+public static class MixingTubeRate
+{
+    /// <summary>Van Albada slope of the middle cell from its two neighbours.</summary>
+    public static double LimitedSlope(double west, double here, double east)
+    {
+        double a = here - west, b = east - here;
+        const double epsilon = 1e-12;
+        return (a * b + Math.Abs(a * b)) * (a + b) / (a * a + b * b + epsilon) * 0.5;
+    }
+
+    [FvGen.NumericalFlux]
+    public static double Upwind(double left, double right, double velocity) =>
+        Math.Max(velocity, 0.0) * left + Math.Min(velocity, 0.0) * right;
+
+    [FvGen.ConservativeUpdate]
+    public static void Rate(double[] u, double[] rate, double velocity, double dx)
+    {
+        for (int i = 2; i < u.Length - 2; i++)
+        {
+            double leftOfEast = u[i] + 0.5 * LimitedSlope(u[i - 1], u[i], u[i + 1]);
+            double rightOfEast = u[i + 1] - 0.5 * LimitedSlope(u[i], u[i + 1], u[i + 2]);
+            double leftOfWest = u[i - 1] + 0.5 * LimitedSlope(u[i - 2], u[i - 1], u[i]);
+            double rightOfWest = u[i] - 0.5 * LimitedSlope(u[i - 1], u[i], u[i + 1]);
+
+            rate[i] = (Upwind(leftOfWest, rightOfWest, velocity) - Upwind(leftOfEast, rightOfEast, velocity)) / dx;
+        }
+    }
+}

@@ -1,0 +1,18 @@
+// expect: none
+// why: the face data flux[•] cancels between faces i and i+1, and the decay term reads only concentration[i] of the target cell, so it is a source.
+using System;
+
+namespace Corpus.Sources;
+
+/// <summary>Radioactive tracer in groundwater: face fluxes plus first-order decay (decay constant lambda).</summary>
+public static class DecayingTracer
+{
+    [FvGen.ConservativeUpdate]
+    public static void Rate([FvGen.FaceData] double[] flux, double[] concentration, double[] rate, double lambda, double dx)
+    {
+        for (int i = 0; i < concentration.Length; i++)
+        {
+            rate[i] = -(flux[i + 1] - flux[i]) / dx - lambda * concentration[i];
+        }
+    }
+}

@@ -1,0 +1,32 @@
+// expect: FVC0001
+// why: the bottom face flux tz[i, j, k]*(p[i, j, k] - p[i, j, k - 1]) was dropped, so the top-face terms tz[•+1]*p[•+1] and tz[•+1]*p[•] have no counterpart in the cell above.
+using System;
+
+namespace Corpus.Structured3D;
+
+/// <summary>Pressure rate in a slightly compressible aquifer block with face transmissibilities.</summary>
+public static class AquiferPressureRate
+{
+    /// <summary>tx[i, j, k] is the face between cells (i-1, j, k) and (i, j, k); likewise ty, tz.</summary>
+    [FvGen.ConservativeUpdate]
+    public static void Rate(
+        double[,,] p,
+        [FvGen.FaceData] double[,,] tx, [FvGen.FaceData] double[,,] ty, [FvGen.FaceData] double[,,] tz,
+        double[,,] volume, double[,,] rate)
+    {
+        for (int i = 1; i < p.GetLength(0) - 1; i++)
+        {
+            for (int j = 1; j < p.GetLength(1) - 1; j++)
+            {
+                for (int k = 1; k < p.GetLength(2) - 1; k++)
+                {
+                    double net =
+                        tx[i + 1, j, k] * (p[i + 1, j, k] - p[i, j, k]) - tx[i, j, k] * (p[i, j, k] - p[i - 1, j, k])
+                        + ty[i, j + 1, k] * (p[i, j + 1, k] - p[i, j, k]) - ty[i, j, k] * (p[i, j, k] - p[i, j - 1, k])
+                        + tz[i, j, k + 1] * (p[i, j, k + 1] - p[i, j, k]);
+                    rate[i, j, k] = net / volume[i, j, k];
+                }
+            }
+        }
+    }
+}

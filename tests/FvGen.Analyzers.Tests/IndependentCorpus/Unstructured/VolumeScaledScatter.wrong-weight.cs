@@ -1,0 +1,27 @@
+// expect: FVC0004
+// why: the neighbour receives transfer / volumes[a], the owner's volume, so the face term enters the two cells with unequal weights.
+using System;
+using FvGen.Meshes.Unstructured;
+
+namespace Corpus.Unstructured;
+
+/// <summary>Rate of a pollutant in a ventilated building zone model, face flux per unit area given per face.</summary>
+public static class ZoneModelRate
+{
+    [FvGen.ConservativeUpdate]
+    public static void Rate(UnstructuredMesh mesh, [FvGen.FaceData] ReadOnlySpan<double> fluxPerArea, Span<double> rate)
+    {
+        ReadOnlySpan<int> owners = mesh.FaceLeft;
+        ReadOnlySpan<int> neighbours = mesh.FaceRight;
+        ReadOnlySpan<double> areas = mesh.FaceAreas;
+        ReadOnlySpan<double> volumes = mesh.CellVolumes;
+        for (int f = 0; f < mesh.InteriorFaceCount; f++)
+        {
+            int a = owners[f];
+            int b = neighbours[f];
+            double transfer = fluxPerArea[f] * areas[f];
+            rate[a] -= transfer / volumes[a];
+            rate[b] += transfer / volumes[a];
+        }
+    }
+}
