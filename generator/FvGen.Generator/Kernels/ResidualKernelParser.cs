@@ -114,7 +114,7 @@ internal static class ResidualKernelParser
 
             mesh ??= meshKind;
             string prefix = p.ScopedKind == ScopedKind.ScopedValue ? "scoped " : "";
-            parameters.Add(new KernelParameter(p.Name, role, TypeText(p, role, element, typeName), isMemory, prefix));
+            parameters.Add(new KernelParameter(Identifier.Escape(p.Name), role, TypeText(p, role, element, typeName), isMemory, prefix));
         }
 
         if (!ok)

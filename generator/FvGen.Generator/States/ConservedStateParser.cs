@@ -19,7 +19,7 @@ internal static class ConservedStateParser
         }
 
         var components = new List<StateComponent>();
-        bool ok = Collect(type, type, prefix: "", components, problems, depth: 0);
+        bool ok = Collect(type, type, prefix: "", accessPrefix: "", components, problems, depth: 0);
         if (components.Count == 0 && ok)
         {
             problems?.Add(new Problem(Descriptors.StateComponentNotDouble, location, type.Name, type.Name, "has no double fields"));
@@ -60,6 +60,7 @@ internal static class ConservedStateParser
         INamedTypeSymbol state,
         INamedTypeSymbol group,
         string prefix,
+        string accessPrefix,
         List<StateComponent> components,
         List<Problem>? problems,
         int depth)
@@ -91,6 +92,7 @@ internal static class ConservedStateParser
             }
 
             string name = prefix + field.Name;
+            string access = accessPrefix + Identifier.Escape(field.Name);
             var location = First(field) ?? First(state);
             if (field.IsReadOnly)
             {
@@ -108,7 +110,7 @@ internal static class ConservedStateParser
 
             if (field.Type.SpecialType == SpecialType.System_Double)
             {
-                components.Add(new StateComponent(name, name));
+                components.Add(new StateComponent(name, access));
                 continue;
             }
 
@@ -116,7 +118,7 @@ internal static class ConservedStateParser
                 && depth < 8
                 && !SymbolEqualityComparer.Default.Equals(nested, state))
             {
-                ok &= Collect(state, nested, name + ".", components, problems, depth + 1);
+                ok &= Collect(state, nested, name + ".", access + ".", components, problems, depth + 1);
                 continue;
             }
 

@@ -67,6 +67,38 @@ public sealed class UsageDiagnosticTests
     }
 
     [Fact]
+    public async Task NestedGenericTypesAndKeywordParameterNamesCompile()
+    {
+        string source = Preamble + """
+            public partial class Outer
+            {
+                public static partial class Physics<TTag>
+                {
+                    [NumericalFlux]
+                    public static Heat Upwind(in Heat left, in Heat right, in FaceGeometry face) => face.Normal.X >= 0 ? face.Normal.X * left : face.Normal.X * right;
+
+                    [BoundaryFlux(BoundaryKind.Outflow)]
+                    public static Heat Out(in Heat inside, in FaceGeometry face) => face.Normal.X * inside;
+
+                    [ResidualKernel(nameof(Upwind))]
+                    public static partial void Residual(StructuredGrid3D grid, ReadOnlySpan<Heat> @in, Span<Heat> @out, BoundaryBinding<Boundary> @params, BoundaryFluxTally? @ref);
+                }
+            }
+
+            [ConservedState]
+            public partial struct Keyworded
+            {
+                public double @double;
+            }
+            """;
+        var (result, output) = GeneratorHarness.Run(GeneratorHarness.Compile(source, Samples.Scalar));
+        Assert.Null(result.Results[0].Exception);
+        Assert.Empty(GeneratorHarness.Errors(output));
+        Assert.Empty(await GeneratorHarness.AnalyzeAsync(output));
+        Assert.Contains(result.Results[0].GeneratedSources, g => g.HintName == "Demo.Outer.Physics.Residual.Residual.g.cs");
+    }
+
+    [Fact]
     public async Task PragmaSuppressesAnFvgDiagnostic()
     {
         string source = Preamble + "#pragma warning disable FVG0002\n[ConservedState] public partial struct Counted { public double Mass; public int Count; }\n#pragma warning restore FVG0002\n";
