@@ -116,8 +116,9 @@ internal static class BalanceChecker
             }
         }
 
-        // A lone term whose weight cancels a similar lone term (or a cell-local product such as U[i]·U[i])
-        // is one face evaluated two ways.
+        // A lone term whose weight cancels a similar lone term sitting at another face is one face
+        // evaluated two ways. (Two parts of one face flux, such as k[i+1]·u[i+1] and k[i+1]·u[i], sit at
+        // the same face: that whole flux is dropped, and each part is reported as such.)
         var paired = new HashSet<ShiftClass>();
         foreach (var a in singles)
         {
@@ -126,7 +127,8 @@ internal static class BalanceChecker
                 continue;
             }
 
-            var b = singles.Concat(sources).FirstOrDefault(x => x != a && !paired.Contains(x) && (a.Sum + x.Sum).IsZero && Similar(a, x));
+            var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && (a.Sum + x.Sum).IsZero && Similar(a, x)
+                && LeadingOffset(a.Representative) != LeadingOffset(x.Representative));
             if (b is not null)
             {
                 paired.Add(a);

@@ -42,6 +42,12 @@ internal sealed class ReadExpr : Expr
     public override Expr Shift(IReadOnlyDictionary<string, long> shift) =>
         new ReadExpr(Array, Subscripts.Select(g => g.Select(s => s.Shift(shift)).ToImmutableArray()).ToImmutableArray(), Path, Role);
 
+    /// <summary>A loop variable used as a value (<c>x0 + i * dx</c>) is a read of the empty array name.</summary>
+    public static ReadExpr LoopIndex(string variable) =>
+        new(string.Empty, ImmutableArray.Create(ImmutableArray.Create<IndexTerm>(new AffineSubscript(AffineIndex.Variable(variable)))), string.Empty, DataRole.Cell);
+
+    public bool IsLoopIndex => Array.Length == 0;
+
     public override string Render() =>
-        Array + string.Concat(Subscripts.Select(g => "[" + string.Join(", ", g.Select(s => s.ToString())) + "]")) + Path;
+        IsLoopIndex ? "(" + Subscripts[0][0] + ")" : Array + string.Concat(Subscripts.Select(g => "[" + string.Join(", ", g.Select(s => s.ToString())) + "]")) + Path;
 }

@@ -73,10 +73,13 @@ public sealed class DesignTableTests
     [Fact]
     public void AdvectiveFormIsNotInConservationForm()
     {
-        // R[i] = -U[i] * (U[i] - U[i-1]) / dx ; U[•]²: -1/dx ; U[•]U[•+1]: +1/dx
+        // R[i] = -U[i] * (U[i] - U[i-1]) / dx ; U[•]²: -1/dx (reads only cell i) ; U[•]U[•+1]: +1/dx, with no
+        // counterpart: reported as the face term U[i]·U[i-1] that no neighbour gives up.
         var value = -Div(Read("U", At("i")) * (Read("U", At("i")) - Read("U", At("i", -1))), Sym("dx"));
         var finding = Assert.Single(Check(I, Assign("R", Cell(At("i")), value)));
-        Assert.Equal(FindingKind.MismatchedFluxEvaluations, finding.Kind);
+        Assert.Equal(FindingKind.DroppedFaceTerm, finding.Kind);
+        Assert.Equal("U[i - 1] * U[i]", finding.Arguments[0]);
+        Assert.Equal("1/dx", finding.Arguments[3]);
     }
 
     [Fact]
