@@ -69,10 +69,19 @@ internal static class BalanceChecker
                 continue;
             }
 
-            if (mapped && c.Members.Count > 1 && sum.IsZero && c.Members.Any(m => m.Weight.LeadingSign > 0) && c.Members.Any(m => m.Weight.LeadingSign < 0))
+            if (GivenAndTakenBack(c))
             {
                 yield return SelfCancelling(c, writes[0]);
                 continue;
+            }
+
+            // A class mixing flux members with members at the target cell: the part of the cell's
+            // weight in symbols no flux member carries is a source (−decay·u[i], the old u[i]).
+            var sourcePart = SourcePart(c);
+            sum -= sourcePart;
+            if (assignment && !oldTotalClaimed && sourcePart.IsOne && IsOldStateClass(c, measures))
+            {
+                oldTotalClaimed = true;
             }
 
             if (sum.IsZero)
@@ -94,6 +103,17 @@ internal static class BalanceChecker
             foreach (var c in unbalanced)
             {
                 yield return OneSidedMapped(c, writes[0]);
+            }
+
+            yield break;
+        }
+
+        // Writing a neighbour of the loop's cell (r[i - 1]) is the half of a face loop that was kept.
+        if (writes[0].Subscripts.SelectMany(g => g).OfType<AffineSubscript>().Any(a => !a.Index.IsConstant && !a.Index.Constant.IsZero))
+        {
+            foreach (var c in unbalanced)
+            {
+                yield return OneSided(c, "it goes to " + writes[0].RenderTarget() + " with weight " + c.Sum + " and to no other cell; the other cell of the face must receive the opposite weight");
             }
 
             yield break;
@@ -127,7 +147,8 @@ internal static class BalanceChecker
                 continue;
             }
 
-            var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && (a.Sum + x.Sum).IsZero && Similar(a, x)
+            var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && Similar(a, x)
+                && ((a.Sum + x.Sum).IsZero || (SameFunction(a, x) && (a.Sum - x.Sum).IsZero))
                 && LeadingOffset(a.Representative) != LeadingOffset(x.Representative));
             if (b is not null)
             {
@@ -141,6 +162,27 @@ internal static class BalanceChecker
         {
             yield return Dropped(a, classes, space);
         }
+    }
+
+    /// <summary>Members at one position with opposite signs from different writes: given to a cell and taken back from it.</summary>
+    private static bool GivenAndTakenBack(ShiftClass c) =>
+        c.Members.GroupBy(m => ShiftKey(m.Shift)).Any(g =>
+            g.Select(m => m.Source.Write).Distinct().Count() > 1
+            && g.Any(m => m.Weight.LeadingSign > 0) && g.Any(m => m.Weight.LeadingSign < 0)
+            && g.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight).IsZero);
+
+    /// <summary>The terms of the target-cell members' weights in monomials that no other member has.</summary>
+    private static SymPoly SourcePart(ShiftClass c)
+    {
+        var local = c.Members.Where(IsSource).ToList();
+        if (local.Count == 0 || local.Count == c.Members.Count)
+        {
+            return SymPoly.Zero;
+        }
+
+        var fluxMonomials = new HashSet<Monomial>(c.Members.Where(m => !IsSource(m)).SelectMany(m => m.Weight.Terms.Select(t => t.Key)));
+        var localWeight = local.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
+        return SymPoly.Of(localWeight.Terms.Where(t => !fluxMonomials.Contains(t.Key)));
     }
 
     private static int Positions(ShiftClass c) => c.Members.Select(m => ShiftKey(m.Shift)).Distinct().Count();
@@ -195,7 +237,7 @@ internal static class BalanceChecker
                         var props = ImmutableDictionary<string, string?>.Empty.Add(FindingProperties.SweptArray, w.Array);
                         yield return new Finding(
                             FindingKind.InPlaceSweep,
-                            ImmutableArray.Create(w.RenderTarget(), read.Render()),
+                            ImmutableArray.Create(w.RenderTarget(), Text.Short(read.Render())),
                             ImmutableArray.Create(w.Origin),
                             t.Origins,
                             props);
@@ -220,13 +262,13 @@ internal static class BalanceChecker
         return new Finding(
             FindingKind.DroppedFaceTerm,
             ImmutableArray.Create(
-                rep.Term.RenderBody(),
+                Text.Short(rep.Term.RenderBody()),
                 leaves ? "leaves" : "enters",
                 rep.Write.RenderCell(),
                 weight.ToString(),
                 leaves ? "receives" : "gives",
                 variable,
-                addend),
+                Text.Short(addend)),
             rep.Term.Origins,
             ImmutableArray<int>.Empty,
             props);
@@ -245,11 +287,11 @@ internal static class BalanceChecker
         return new Finding(
             FindingKind.MismatchedFluxEvaluations,
             ImmutableArray.Create(
-                b.Representative.Term.RenderBody(),
+                Text.Short(b.Representative.Term.RenderBody()),
                 b.Sum.ToString(),
-                a.Representative.Term.RenderBody(),
+                Text.Short(a.Representative.Term.RenderBody()),
                 a.Sum.ToString(),
-                expected),
+                Text.Short(expected)),
             b.Representative.Term.Origins,
             a.Representative.Term.Origins,
             ImmutableDictionary<string, string?>.Empty);
@@ -262,15 +304,15 @@ internal static class BalanceChecker
         var others = c.Members.Where(m => m != last).ToList();
         var othersWeight = others.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
         var needed = last.Sign > 0 ? -othersWeight : othersWeight;
-        string weights = string.Join(", ", c.Members.Select(m => "`" + m.Source.Term.RenderBody() + "` " + m.Source.Term.Coefficient));
+        string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
         return new Finding(
             FindingKind.UnbalancedFaceTerm,
             ImmutableArray.Create(
-                last.Source.Term.RenderBody(),
+                Text.Short(last.Source.Term.RenderBody()),
                 weights,
                 c.Sum.ToString(),
                 "0",
-                "for the difference to cancel, `" + last.Source.Term.RenderBody() + "` needs weight " + needed),
+                "for the difference to cancel, `" + Text.Short(last.Source.Term.RenderBody()) + "` needs weight " + needed),
             last.Source.Term.Origins,
             others.SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
             ImmutableDictionary<string, string?>.Empty);
@@ -279,11 +321,11 @@ internal static class BalanceChecker
     private static Finding OldTotal(ShiftClass c)
     {
         var rep = c.Representative;
-        string weights = string.Join(", ", c.Members.Select(m => "`" + m.Source.Term.RenderBody() + "` " + m.Source.Term.Coefficient));
+        string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
         return new Finding(
             FindingKind.UnbalancedFaceTerm,
             ImmutableArray.Create(
-                rep.Term.RenderBody(),
+                Text.Short(rep.Term.RenderBody()),
                 weights,
                 c.Sum.ToString(),
                 "1",
@@ -316,7 +358,7 @@ internal static class BalanceChecker
     private static Finding OneSided(ShiftClass c, string detail, ImmutableDictionary<string, string?>? props = null) =>
         new(
             FindingKind.OneSidedScatter,
-            ImmutableArray.Create(c.Representative.Term.RenderBody(), detail),
+            ImmutableArray.Create(Text.Short(c.Representative.Term.RenderBody()), detail),
             c.Representative.Term.Origins,
             c.Members.Skip(1).SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
             props ?? ImmutableDictionary<string, string?>.Empty);
@@ -325,7 +367,7 @@ internal static class BalanceChecker
         new(
             FindingKind.OneSidedScatter,
             ImmutableArray.Create(
-                c.Representative.Term.RenderBody(),
+                Text.Short(c.Representative.Term.RenderBody()),
                 "it is taken from and given back to the same cell " + write.RenderTarget() + ", so the other cell of the face gets nothing"),
             c.Members[c.Members.Count - 1].Source.Term.Origins,
             c.Members.Take(c.Members.Count - 1).SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
@@ -416,24 +458,17 @@ internal static class BalanceChecker
     private static ImmutableDictionary<string, long> Unit(List<LoopVariable> lattice, string variable, long value) =>
         lattice.ToImmutableDictionary(v => v.Name, v => v.Name == variable ? value : 0L, StringComparer.Ordinal);
 
-    /// <summary>Two lone classes are one face seen twice when both bodies are calls, or products of the same arrays.</summary>
+    /// <summary>Two lone classes are one face seen twice when both bodies are evaluations (a call or a product), not plain reads.</summary>
     private static bool Similar(ShiftClass a, ShiftClass b)
     {
-        var fa = a.Representative.Term.Factors;
-        var fb = b.Representative.Term.Factors;
-        if (fa.Any(f => f is CallExpr) && fb.Any(f => f is CallExpr))
-        {
-            return true;
-        }
-
-        if (fa.Length < 2 || fb.Length < 2)
-        {
-            return false;
-        }
-
-        string Heads(ImmutableArray<Expr> fs) => string.Join(",", fs.Select(f => f is ReadExpr r ? r.Array + r.Path : f.ShapeKey).OrderBy(s => s, StringComparer.Ordinal));
-        return Heads(fa) == Heads(fb);
+        static bool Evaluation(ImmutableArray<Expr> factors) => factors.Length > 1 || factors.Any(f => f is CallExpr);
+        return Evaluation(a.Representative.Term.Factors) && Evaluation(b.Representative.Term.Factors);
     }
+
+    /// <summary>Both bodies are one call of the same function (whose two evaluations may differ only in order or sign).</summary>
+    private static bool SameFunction(ShiftClass a, ShiftClass b) =>
+        a.Representative.Term.Factors.Length == 1 && b.Representative.Term.Factors.Length == 1
+        && a.Representative.Term.Factors[0] is CallExpr ca && b.Representative.Term.Factors[0] is CallExpr cb && ca.Function == cb.Function;
 
     /// <summary>The old state: every member a single read of one cell array (times the cell measure, once multiplied out).</summary>
     private static bool IsOldStateClass(ShiftClass c, HashSet<string> measures)
@@ -453,10 +488,21 @@ internal static class BalanceChecker
     /// <summary>A source reads only the cell it writes: no face data, every subscript one of the target's.</summary>
     private static bool IsSource(ClassMember member)
     {
-        var targetKeys = new HashSet<string>(member.Source.Write.Subscripts.SelectMany(g => g).Select(s => s.Key), StringComparer.Ordinal);
+        var target = member.Source.Write.Subscripts.SelectMany(g => g).ToList();
+        var targetKeys = new HashSet<string>(target.Select(s => s.Key), StringComparer.Ordinal);
+
+        // A boundary loop writes through one map and reads cells through it only; data of its own
+        // face (indexed by the map's argument) belongs to that boundary flux.
+        var boundaryFace = new HashSet<string>(target.OfType<MappedSubscript>().SelectMany(m => m.Arguments).Select(a => a.Key), StringComparer.Ordinal);
         foreach (var read in member.Source.Term.Reads)
         {
-            if (read.Role == DataRole.Face || read.AllSubscripts.Any(s => !targetKeys.Contains(s.Key)))
+            bool ownFaceData = boundaryFace.Count > 0 && read.Role != DataRole.InteriorFace && read.AllSubscripts.All(s => boundaryFace.Contains(s.Key));
+            if (ownFaceData)
+            {
+                continue;
+            }
+
+            if (read.Role != DataRole.Cell || read.AllSubscripts.Any(s => !targetKeys.Contains(s.Key)))
             {
                 return false;
             }

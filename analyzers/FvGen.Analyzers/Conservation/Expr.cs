@@ -41,6 +41,9 @@ internal enum DataRole
 
     /// <summary>One value per face: a face field, a parameter marked as face data, or an array filled from fluxes by an earlier loop.</summary>
     Face,
+
+    /// <summary>Face data known to be computed from the cells on both sides of interior faces (it cannot be a boundary flux).</summary>
+    InteriorFace,
 }
 
 /// <summary>How a call may be rearranged without changing its value.</summary>

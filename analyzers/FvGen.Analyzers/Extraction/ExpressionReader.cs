@@ -59,7 +59,7 @@ internal sealed class ExpressionReader
             case IFieldReferenceOperation or IPropertyReferenceOperation when IsElementLike(operation):
                 return ReadElement(operation);
             case IFieldReferenceOperation or IPropertyReferenceOperation:
-                return SumExpr.Invariant(SymPoly.Symbol(Name(operation)));
+                return ReadMember(operation);
             case IInvocationOperation invocation:
                 return ReadCall(invocation);
             case IConditionalOperation { WhenFalse: not null } conditional:
@@ -228,7 +228,8 @@ internal sealed class ExpressionReader
         }
     }
 
-    private DataRole WithDefinitions(string root, DataRole role) => _method.FaceArrays.Contains(root) ? DataRole.Face : role;
+    private DataRole WithDefinitions(string root, DataRole role) =>
+        _method.InteriorFaceArrays.Contains(root) ? DataRole.InteriorFace : _method.FaceArrays.Contains(root) ? DataRole.Face : role;
 
     private DataRole RoleOfType(ITypeSymbol? type) => Known.IsFaceField(type) ? DataRole.Face : DataRole.Cell;
 
@@ -260,6 +261,57 @@ internal sealed class ExpressionReader
 
         return SumExpr.Factor(read, _method.Origins.Add(operation.Syntax));
     }
+
+    /// <summary>
+    /// A member of a loop-invariant receiver is a symbol (<c>mesh.Dx</c>); a member of a value
+    /// computed in the loop (<c>flux.Mass</c> of a returned state) is a projection of that value,
+    /// distributed over its terms.
+    /// </summary>
+    private SumExpr ReadMember(IOperation member)
+    {
+        var (instance, name) = member switch
+        {
+            IFieldReferenceOperation f => (f.Instance, f.Field.Name),
+            IPropertyReferenceOperation p => (p.Instance, p.Property.Name),
+            _ => (null, string.Empty),
+        };
+        if (instance is null || instance is IInstanceReferenceOperation || IsInvariantReceiver(instance))
+        {
+            return SumExpr.Invariant(SymPoly.Symbol(Name(member)));
+        }
+
+        var value = Read(instance);
+        if (value.IsInvariant)
+        {
+            return SumExpr.Invariant(SymPoly.Symbol(Name(member)));
+        }
+
+        var terms = new List<Term>();
+        foreach (var t in value.Terms)
+        {
+            if (t.IsInvariant || t.Factors.Length != 1)
+            {
+                return Opaque("." + name, member.Syntax, value);
+            }
+
+            var projected = t.Factors[0] is ReadExpr r && !r.IsLoopIndex
+                ? (Expr)new ReadExpr(r.Array, r.Subscripts, r.Path + "." + name, r.Role)
+                : new CallExpr("." + name, ImmutableArray.Create(SumExpr.Factor(t.Factors[0])), CallSymmetry.None);
+            terms.Add(new Term(t.Coefficient, new[] { projected }, t.Origins));
+        }
+
+        return SumExpr.Of(terms);
+    }
+
+    private bool IsInvariantReceiver(IOperation instance) => instance switch
+    {
+        IParameterReferenceOperation p => !Bindings.ContainsKey(p.Parameter),
+        ILocalReferenceOperation l => !Bindings.TryGetValue(l.Local, out var b) || b is ArrayBinding || (b is ValueBinding v && v.Value.IsInvariant),
+        IFieldReferenceOperation { Instance: var i } => i is null || i is IInstanceReferenceOperation || IsInvariantReceiver(i),
+        IPropertyReferenceOperation { Property.IsIndexer: false, Instance: var i } => i is null || i is IInstanceReferenceOperation || IsInvariantReceiver(i),
+        IConversionOperation c => IsInvariantReceiver(c.Operand),
+        _ => false,
+    };
 
     private SumExpr ReadBinary(IBinaryOperation binary)
     {

@@ -298,6 +298,8 @@ internal sealed class LoopNestReader
                 return;
             case IBranchOperation branch:
                 throw new NotModelledException($"`{ExpressionReader.Short(branch.Syntax)}` skips part of the iteration space", branch.Syntax);
+            case IReturnOperation { IsImplicit: true, ReturnedValue: null }:
+                return;
             case IReturnOperation ret:
                 throw new NotModelledException("the loop body returns early", ret.Syntax);
             default:
@@ -384,10 +386,19 @@ internal sealed class LoopNestReader
     private void AddWrite(IOperation targetOperation, SumExpr value, bool isAssignment, SyntaxNode syntax)
     {
         var target = _reader.ResolveElement(targetOperation);
-        if (target.Role == DataRole.Face)
+        if (target.Role != DataRole.Cell)
         {
             // Filling face data (a flux buffer) is a definition, not an update.
             return;
+        }
+
+        // R[x] = R[x] + … is an increment of R[x].
+        var self = target.ToRead();
+        var selfTerm = value.Terms.FirstOrDefault(t => t.Factors.Length == 1 && t.Factors[0].Key == self.Key && t.Coefficient.IsOne);
+        if (isAssignment && selfTerm is not null)
+        {
+            value = SumExpr.Of(value.Terms.Where(t => !ReferenceEquals(t, selfTerm)));
+            isAssignment = false;
         }
 
         _writes.Add(new UpdateWrite(target.Array, target.Path, target.Subscripts, value, isAssignment, _method.Origins.Add(syntax)));

@@ -26,6 +26,9 @@ internal sealed class MethodContext
     /// <summary>Arrays filled by an earlier loop of the method (definitions): face data for later loops.</summary>
     public HashSet<string> FaceArrays { get; } = new(System.StringComparer.Ordinal);
 
+    /// <summary>Those of <see cref="FaceArrays"/> whose definition read cells through two index maps.</summary>
+    public HashSet<string> InteriorFaceArrays { get; } = new(System.StringComparer.Ordinal);
+
     public List<ConservationIssue> Issues { get; } = new();
 
     private readonly HashSet<IMethodSymbol> _impureReported = new(SymbolEqualityComparer.Default);

@@ -154,25 +154,34 @@ internal static class MethodReader
 
     /// <summary>
     /// A loop is a definition (it fills face data) when every array it writes is assigned, not
-    /// incremented, and read by a later loop of the method; those arrays are face data from then on.
+    /// incremented, and a later loop of the method reads it at a subscript that loop does not write
+    /// (<c>flux[i + 1] - flux[i]</c> into <c>r[i]</c>, or <c>faceFlux[f]</c> scattered to
+    /// <c>res[left[f]]</c>); those arrays are face data from then on. An array a later loop reads only
+    /// at the cell it writes (a residual used by an update) stays cell data, and the loop that fills
+    /// it is checked as an update.
     /// </summary>
     private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, MethodContext method)
     {
         var accesses = nests.Select(n => Accesses(n.Loop, n.Outer, method)).ToList();
         for (int k = 0; k < nests.Count; k++)
         {
-            var (written, read, onlyAssigned) = accesses[k];
+            var (written, read, _, onlyAssigned) = accesses[k];
             if (written.Count == 0 || !onlyAssigned)
             {
                 continue;
             }
 
-            var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Read), System.StringComparer.Ordinal);
+            var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Differenced), System.StringComparer.Ordinal);
             if (written.All(readLater.Contains) && !written.Any(read.Contains))
             {
+                bool twoSided = MapsUsed(nests[k].Loop) > 1;
                 foreach (var w in written)
                 {
                     method.FaceArrays.Add(w);
+                    if (twoSided)
+                    {
+                        method.InteriorFaceArrays.Add(w);
+                    }
                 }
             }
         }
@@ -180,11 +189,11 @@ internal static class MethodReader
 
     private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method, List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests)
     {
-        var (written, _, onlyAssigned) = Accesses(loop, outer, method);
+        var (written, _, _, onlyAssigned) = Accesses(loop, outer, method);
         return written.Count > 0 && onlyAssigned && written.All(method.FaceArrays.Contains);
     }
 
-    private static (HashSet<string> Written, HashSet<string> Read, bool OnlyAssigned) Accesses(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
+    private static (HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned) Accesses(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
     {
         var reader = new ExpressionReader(method, outer);
         var written = new HashSet<string>(System.StringComparer.Ordinal);
@@ -213,15 +222,69 @@ internal static class MethodReader
             }
         }
 
+        var subscripts = new Dictionary<string, HashSet<string>>(System.StringComparer.Ordinal);
         foreach (var op in loop.Descendants())
         {
             if (op is IArrayElementReferenceOperation or IPropertyReferenceOperation { Property.IsIndexer: true } && !targets.Contains(op) && RootOf(op, reader) is { } root)
             {
                 read.Add(root);
+                string index = SubscriptText(op);
+                if (!subscripts.TryGetValue(root, out var set))
+                {
+                    subscripts[root] = set = new HashSet<string>(System.StringComparer.Ordinal);
+                }
+
+                set.Add(index);
             }
         }
 
-        return (written, read, onlyAssigned);
+        var writtenAt = new HashSet<string>(targets.Select(SubscriptText), System.StringComparer.Ordinal);
+        var differenced = new HashSet<string>(subscripts.Where(s => s.Value.Any(i => !writtenAt.Contains(i))).Select(s => s.Key), System.StringComparer.Ordinal);
+        return (written, read, differenced, onlyAssigned);
+    }
+
+    /// <summary>How many distinct index maps the loop reads cells through (<c>u[left[f]]</c>, <c>u[right[f]]</c>: two).</summary>
+    private static int MapsUsed(IOperation loop)
+    {
+        var maps = new HashSet<string>(System.StringComparer.Ordinal);
+        foreach (var op in loop.Descendants())
+        {
+            var indices = op switch
+            {
+                IArrayElementReferenceOperation e => e.Indices.ToList(),
+                IPropertyReferenceOperation { Property.IsIndexer: true } p => p.Arguments.Select(a => a.Value).ToList(),
+                _ => new List<IOperation>(),
+            };
+            foreach (var index in indices)
+            {
+                var inner = index is IConversionOperation c ? c.Operand : index;
+                if (inner is IArrayElementReferenceOperation or IPropertyReferenceOperation { Property.IsIndexer: true })
+                {
+                    maps.Add(SubscriptText(inner) + "@" + inner.Syntax.ToString().Split('[')[0]);
+                }
+                else if (inner is ILocalReferenceOperation local)
+                {
+                    maps.Add("local:" + local.Local.Name);
+                }
+            }
+        }
+
+        return maps.Count(m => !m.StartsWith("local:", System.StringComparison.Ordinal)) > 1 ? 2 : maps.Count(m => m.StartsWith("local:", System.StringComparison.Ordinal)) > 1 ? 2 : 1;
+    }
+
+    private static string SubscriptText(IOperation element)
+    {
+        while (element is IFieldReferenceOperation { Instance: { } instance })
+        {
+            element = instance;
+        }
+
+        return element switch
+        {
+            IArrayElementReferenceOperation e => string.Join(",", e.Indices.Select(i => i.Syntax.ToString().Replace(" ", string.Empty))),
+            IPropertyReferenceOperation p => string.Join(",", p.Arguments.Select(a => a.Value.Syntax.ToString().Replace(" ", string.Empty))),
+            _ => string.Empty,
+        };
     }
 
     private static string? RootOf(IOperation target, ExpressionReader reader)
