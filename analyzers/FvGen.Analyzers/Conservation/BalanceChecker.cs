@@ -113,7 +113,18 @@ internal static class BalanceChecker
         {
             foreach (var c in unbalanced)
             {
-                yield return OneSided(c, "it goes to " + writes[0].RenderTarget() + " with weight " + c.Sum + " and to no other cell; the other cell of the face must receive the opposite weight");
+                var finding = OneSided(c, "it goes to " + writes[0].RenderTarget() + " with weight " + c.Sum + " and to no other cell; the other cell of the face must receive the opposite weight");
+                var other = OtherCell(c.Representative);
+                if (other is not null && c.Members.Count == 1)
+                {
+                    finding = finding with
+                    {
+                        Properties = finding.Properties.Add(FindingProperties.OppositeTarget, other),
+                        WriteOrigin = c.Representative.Write.Origin,
+                    };
+                }
+
+                yield return finding;
             }
 
             yield break;
@@ -162,6 +173,22 @@ internal static class BalanceChecker
         {
             yield return Dropped(a, classes, space);
         }
+    }
+
+    /// <summary>The one other cell a face term reads besides the target (<c>r[i]</c> for a term written to <c>r[i - 1]</c>).</summary>
+    private static string? OtherCell(AttributedTerm term)
+    {
+        var write = term.Write;
+        var cells = term.Term.Reads
+            .Where(r => r.Role == DataRole.Cell && !r.IsLoopIndex && r.Subscripts.Length == write.Subscripts.Length
+                && r.Subscripts.Zip(write.Subscripts, (a, b) => a.Length == b.Length && a.Zip(b, (x, y) => x.ShapeKey == y.ShapeKey).All(s => s)).All(s => s))
+            .Select(r => r.Subscripts)
+            .GroupBy(s => string.Join("][", s.Select(g => string.Join(",", g.Select(x => x.Key)))))
+            .Where(g => g.Key != write.SubscriptKey)
+            .ToList();
+        return cells.Count == 1
+            ? write.Array + string.Concat(cells[0].First().Select(g => "[" + string.Join(", ", g.Select(x => x.ToString())) + "]")) + write.Path
+            : null;
     }
 
     /// <summary>Members at one position with opposite signs from different writes: given to a cell and taken back from it.</summary>
@@ -240,7 +267,8 @@ internal static class BalanceChecker
                             ImmutableArray.Create(w.RenderTarget(), Text.Short(read.Render())),
                             ImmutableArray.Create(w.Origin),
                             t.Origins,
-                            props);
+                            props)
+                        { WriteOrigin = w.Origin };
                     }
                 }
             }
@@ -256,9 +284,16 @@ internal static class BalanceChecker
         var (sign, text) = CSharpText.SignedProduct(-weight, counterpart.RenderBody());
         string addend = (sign < 0 ? "- " : "+ ") + text;
         bool leaves = weight.LeadingSign < 0;
+        var (templateSign, template) = CSharpText.SignedProduct(-weight, "§");
         var props = ImmutableDictionary<string, string?>.Empty
-            .Add(FindingProperties.CounterpartShift, string.Join(";", shift.Select(kv => kv.Key + "=" + kv.Value)))
-            .Add(FindingProperties.CounterpartText, addend);
+            .Add(FindingProperties.CounterpartShift, string.Join(";", shift.Where(kv => kv.Value != 0).Select(kv => kv.Key + "=" + kv.Value)))
+            .Add(FindingProperties.CounterpartText, addend)
+            .Add(FindingProperties.CounterpartTemplate, (templateSign < 0 ? "- " : "+ ") + template);
+        if (rep.Term.Factors.Length == 1 && rep.Term.Origins.Length == 1)
+        {
+            props = props.Add(FindingProperties.SingleFactor, "true");
+        }
+
         return new Finding(
             FindingKind.DroppedFaceTerm,
             ImmutableArray.Create(
@@ -271,7 +306,8 @@ internal static class BalanceChecker
                 Text.Short(addend)),
             rep.Term.Origins,
             ImmutableArray<int>.Empty,
-            props);
+            props)
+        { WriteOrigin = rep.Write.Origin };
     }
 
     private static Finding Mismatched(ShiftClass a, ShiftClass b, List<ShiftClass> all, LoopSpace space)
@@ -352,7 +388,7 @@ internal static class BalanceChecker
                 .Add(FindingProperties.OtherMap, otherMap);
         }
 
-        return OneSided(c, detail, props);
+        return OneSided(c, detail, props) with { WriteOrigin = c.Members.Count == 1 ? write.Origin : -1 };
     }
 
     private static Finding OneSided(ShiftClass c, string detail, ImmutableDictionary<string, string?>? props = null) =>

@@ -30,7 +30,11 @@ internal sealed record Finding(
     ImmutableArray<string> Arguments,
     ImmutableArray<int> Primary,
     ImmutableArray<int> Additional,
-    ImmutableDictionary<string, string?> Properties);
+    ImmutableDictionary<string, string?> Properties)
+{
+    /// <summary>Origin of the write the finding is about (for a fix that edits it); -1 when none.</summary>
+    public int WriteOrigin { get; init; } = -1;
+}
 
 /// <summary>Names of the properties a finding passes to its code fix.</summary>
 internal static class FindingProperties
@@ -41,8 +45,16 @@ internal static class FindingProperties
     /// <summary>C# text to append to the write: <c>+ fy[i, j] / dy</c>.</summary>
     public const string CounterpartText = "CounterpartText";
 
-    /// <summary>The signed weight of the counterpart relative to the offending term: <c>-1</c> or <c>1</c> times the ratio.</summary>
-    public const string CounterpartCoefficient = "CounterpartCoefficient";
+    /// <summary>The counterpart as an addend with <c>§</c> for the shifted term: <c>+ § / dy</c>.</summary>
+    public const string CounterpartTemplate = "CounterpartTemplate";
+
+    /// <summary>Present when the body is one read or call, so shifting its syntax gives the counterpart.</summary>
+    public const string SingleFactor = "SingleFactor";
+
+    /// <summary>Start and length of the write the fix edits (added by the extraction layer).</summary>
+    public const string WriteStart = "WriteStart";
+
+    public const string WriteLength = "WriteLength";
 
     /// <summary>C# text of the target the missing opposite update writes, <c>R[right[f]]</c>.</summary>
     public const string OppositeTarget = "OppositeTarget";

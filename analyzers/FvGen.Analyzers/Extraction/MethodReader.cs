@@ -339,6 +339,14 @@ internal static class MethodReader
             FindingKind.OneSidedScatter => DiagnosticIds.OneSidedScatter,
             _ => DiagnosticIds.InPlaceSweep,
         };
-        return new ConservationIssue(id, finding.Arguments, location, rest, finding.Properties);
+        var properties = finding.Properties;
+        if (origins[finding.WriteOrigin] is { } write)
+        {
+            properties = properties
+                .SetItem(FindingProperties.WriteStart, write.SourceSpan.Start.ToString(System.Globalization.CultureInfo.InvariantCulture))
+                .SetItem(FindingProperties.WriteLength, write.SourceSpan.Length.ToString(System.Globalization.CultureInfo.InvariantCulture));
+        }
+
+        return new ConservationIssue(id, finding.Arguments, location, rest, properties);
     }
 }
