@@ -44,10 +44,29 @@ internal sealed class ConservationAnalysis
     public IReadOnlyList<ConservationIssue> Issues(IMethodSymbol method, IOperation body) =>
         _results.GetOrAdd(body.Syntax, _ => new Lazy<IReadOnlyList<ConservationIssue>>(() => Run(method, body))).Value;
 
+    /// <summary>Prefix of the reason given when the checker itself fails; tests assert it never appears.</summary>
+    public const string InternalErrorReason = "the checker hit an internal error";
+
     private IReadOnlyList<ConservationIssue> Run(IMethodSymbol method, IOperation body)
     {
         var context = new MethodContext(Known, Purity, method.ContainingType);
-        return MethodReader.Analyze(body, context).ToList();
+        try
+        {
+            return MethodReader.Analyze(body, context).ToList();
+        }
+        catch (Exception e) when (e is not OperationCanceledException)
+        {
+            // Never a crash in the IDE and never a silent pass: the method is reported as not analyzed.
+            return new[]
+            {
+                new ConservationIssue(
+                    DiagnosticIds.NotAnalyzed,
+                    System.Collections.Immutable.ImmutableArray.Create($"{InternalErrorReason} ({e.GetType().Name}: {e.Message}); please report it"),
+                    body.Syntax.GetLocation(),
+                    System.Collections.Immutable.ImmutableArray<Location>.Empty,
+                    System.Collections.Immutable.ImmutableDictionary<string, string?>.Empty),
+            };
+        }
     }
 
     /// <summary>The body among a block's operations: a method, constructor or accessor body.</summary>
