@@ -150,6 +150,13 @@ internal sealed class LoopNestReader
                     when compound.OperatorKind is BinaryOperatorKind.Add or BinaryOperatorKind.Subtract:
                     steps.Add((local.Local, compound.OperatorKind == BinaryOperatorKind.Add ? c : -c));
                     break;
+                case ISimpleAssignmentOperation
+                {
+                    Target: ILocalReferenceOperation self,
+                    Value: IBinaryOperation { OperatorKind: BinaryOperatorKind.Add or BinaryOperatorKind.Subtract, LeftOperand: ILocalReferenceOperation again, RightOperand.ConstantValue: { HasValue: true, Value: int c } } step,
+                } when SymbolEqualityComparer.Default.Equals(self.Local, again.Local):
+                    steps.Add((self.Local, step.OperatorKind == BinaryOperatorKind.Add ? c : -c));
+                    break;
                 case ISimpleAssignmentOperation { Target: ILocalReferenceOperation copy, Value: ILocalReferenceOperation of }:
                     copies.Add((copy.Local, of.Local, order));
                     break;
