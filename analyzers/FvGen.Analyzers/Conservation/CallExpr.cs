@@ -14,7 +14,12 @@ internal sealed class CallExpr : Expr
     public CallExpr(string function, ImmutableArray<SumExpr> arguments, CallSymmetry symmetry)
     {
         Function = function;
-        Arguments = arguments;
+
+        // Symmetric calls keep their arguments in one canonical order, so equal calls have equal keys.
+        Arguments = symmetry == CallSymmetry.Symmetric
+            ? arguments.OrderBy(a => a.Key, System.StringComparer.Ordinal).ToImmutableArray()
+            : arguments;
+        arguments = Arguments;
         Symmetry = symmetry;
         Key = "C:" + function + "(" + string.Join(",", arguments.Select(a => a.Key)) + ")";
         var shapes = arguments.Select(a => a.ShapeKey).ToList();

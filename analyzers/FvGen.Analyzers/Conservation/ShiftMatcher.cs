@@ -28,6 +28,12 @@ internal static class ShiftMatcher
             return null;
         }
 
+        var fast = FastMatch(a, b, space);
+        if (fast is not null || !NeedsAlignment(a))
+        {
+            return fast;
+        }
+
         int tried = 0;
         foreach (var (pairs, sign) in MatchFactors(a.Factors, b.Factors, ImmutableList<(AffineIndex, AffineIndex)>.Empty, 1))
         {
@@ -45,6 +51,47 @@ internal static class ShiftMatcher
 
         return null;
     }
+
+    /// <summary>
+    /// Bodies are kept in a canonical order (products and sums sorted by key, symmetric calls'
+    /// arguments too), so B is A moved by n exactly when A shifted by n has B's key. The shift must take
+    /// A's first read onto some read of B of the same shape: those few candidates are tried.
+    /// </summary>
+    private static Match? FastMatch(Term a, Term b, LoopSpace space)
+    {
+        var first = a.Reads.FirstOrDefault();
+        if (first is null)
+        {
+            return a.BodyKey == b.BodyKey ? new Match(ImmutableDictionary<string, long>.Empty, 1) : null;
+        }
+
+        foreach (var candidate in b.Reads)
+        {
+            if (candidate.ShapeKey != first.ShapeKey)
+            {
+                continue;
+            }
+
+            var pairs = MatchReads(first, candidate, ImmutableList<(AffineIndex, AffineIndex)>.Empty);
+            var shift = pairs is null ? null : Solve(pairs, space);
+            if (shift is not null && a.Shift(shift).BodyKey == b.BodyKey)
+            {
+                return new Match(shift, 1);
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>Antisymmetric flips and reciprocals (whose normalised sign may differ after a shift) need the full alignment search.</summary>
+    private static bool NeedsAlignment(Term a) => a.Factors.Any(NeedsAlignment);
+
+    private static bool NeedsAlignment(Expr e) => e switch
+    {
+        CallExpr c => c.Symmetry == CallSymmetry.Antisymmetric || c.Arguments.Any(s => s.Terms.Any(NeedsAlignment)),
+        ReciprocalExpr => true,
+        _ => false,
+    };
 
     /// <summary>The integer shift vector that maps every first index of a pair onto its second, or null.</summary>
     public static ImmutableDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)

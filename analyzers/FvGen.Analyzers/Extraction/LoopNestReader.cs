@@ -490,6 +490,10 @@ internal sealed class LoopNestReader
             }
         }
 
+        var headers = new HashSet<IOperation>(
+            loop.DescendantsAndSelf().OfType<IForLoopOperation>()
+                .SelectMany(f => f.Before.Concat(f.AtLoopBottom))
+                .SelectMany(h => h.DescendantsAndSelf()));
         var result = new HashSet<ILocalSymbol>(SymbolEqualityComparer.Default);
         foreach (var op in loop.Descendants())
         {
@@ -499,7 +503,7 @@ internal sealed class LoopNestReader
                 IIncrementOrDecrementOperation i => i.Target,
                 _ => null,
             };
-            if (target is ILocalReferenceOperation local && !declaredInside.Contains(local.Local) && !IsForHeader(loop, op))
+            if (target is ILocalReferenceOperation local && !declaredInside.Contains(local.Local) && !headers.Contains(op))
             {
                 result.Add(local.Local);
             }
@@ -508,7 +512,4 @@ internal sealed class LoopNestReader
         return result;
     }
 
-    private static bool IsForHeader(IOperation loop, IOperation op) =>
-        loop.Descendants().OfType<IForLoopOperation>().Prepend(loop as IForLoopOperation).Any(f =>
-            f is not null && (f.Before.Any(b => b == op || b.Descendants().Contains(op)) || f.AtLoopBottom.Any(b => b == op || b.Descendants().Contains(op))));
 }
