@@ -30,6 +30,36 @@ public sealed class NeverCrashTests
         }
     }
 
+    public static TheoryData<string> RuleTestFiles() =>
+        [.. Directory.GetFiles(Path.Combine(RepositoryRoot(), "tests", "FvGen.Analyzers.Tests", "Rules"), "*.cs").Select(f => Path.GetFileName(f))];
+
+    /// <summary>The kernels written inline in the rule tests (raw strings, markup removed).</summary>
+    [Theory]
+    [MemberData(nameof(RuleTestFiles))]
+    public async Task EveryTokenPrefixOfTheRuleTestSources(string file)
+    {
+        string text = File.ReadAllText(Path.Combine(RepositoryRoot(), "tests", "FvGen.Analyzers.Tests", "Rules", file));
+        var sources = System.Text.RegularExpressions.Regex.Matches(text, "\"\"\"\\n(?<body>.*?)\"\"\"", System.Text.RegularExpressions.RegexOptions.Singleline)
+            .Select(m => System.Text.RegularExpressions.Regex.Replace(m.Groups["body"].Value, @"\{\|#\d+:|\|\}|\{\{\w+\}\}", string.Empty))
+            .ToList();
+        Assert.NotEmpty(sources);
+        foreach (var source in sources)
+        {
+            await AssertNoCrashOnPrefixes("using System;\nusing System.Threading.Tasks;\nusing FvGen;\n" + source);
+        }
+    }
+
+    private static string RepositoryRoot()
+    {
+        var dir = new DirectoryInfo(AppContext.BaseDirectory);
+        while (dir is not null && !File.Exists(Path.Combine(dir.FullName, "FvGen.sln")))
+        {
+            dir = dir.Parent;
+        }
+
+        return dir?.FullName ?? throw new InvalidOperationException("FvGen.sln not found above the test directory.");
+    }
+
     [Theory]
     [InlineData("[ConservativeUpdate] static void M(double[] r) { for (int i = 0; i < ; i++) r[i] = r[i +; }")]
     [InlineData("[ConservativeUpdate] static void M(double[] r, double[] f) { for (int i = 0;; ) r[i] -= f[i + 1] - f[; }")]

@@ -19,20 +19,8 @@ internal sealed class CallExpr : Expr
         Arguments = symmetry == CallSymmetry.Symmetric
             ? arguments.OrderBy(a => a.Key, System.StringComparer.Ordinal).ToImmutableArray()
             : arguments;
-        arguments = Arguments;
         Symmetry = symmetry;
-        Key = "C:" + function + "(" + string.Join(",", arguments.Select(a => a.Key)) + ")";
-        var shapes = arguments.Select(a => a.ShapeKey).ToList();
-        if (symmetry == CallSymmetry.Symmetric)
-        {
-            shapes.Sort(System.StringComparer.Ordinal);
-        }
-        else if (symmetry == CallSymmetry.Antisymmetric && shapes.Count >= 2 && string.CompareOrdinal(shapes[0], shapes[1]) > 0)
-        {
-            (shapes[0], shapes[1]) = (shapes[1], shapes[0]);
-        }
-
-        ShapeKey = "C:" + function + "(" + string.Join(",", shapes) + ")";
+        Key = "C:" + function + "(" + string.Join(",", Arguments.Select(a => a.Key)) + ")";
     }
 
     /// <summary>Display name of the function (<c>Rusanov</c>, <c>Math.Max</c>, <c>?:</c>).</summary>
@@ -44,7 +32,24 @@ internal sealed class CallExpr : Expr
 
     public override string Key { get; }
 
-    public override string ShapeKey { get; }
+    private string? _shapeKey;
+
+    public override string ShapeKey => _shapeKey ??= ComputeShapeKey();
+
+    private string ComputeShapeKey()
+    {
+        var shapes = Arguments.Select(a => a.ShapeKey).ToList();
+        if (Symmetry == CallSymmetry.Symmetric)
+        {
+            shapes.Sort(System.StringComparer.Ordinal);
+        }
+        else if (Symmetry == CallSymmetry.Antisymmetric && shapes.Count >= 2 && string.CompareOrdinal(shapes[0], shapes[1]) > 0)
+        {
+            (shapes[0], shapes[1]) = (shapes[1], shapes[0]);
+        }
+
+        return "C:" + Function + "(" + string.Join(",", shapes) + ")";
+    }
 
     public override IEnumerable<ReadExpr> Reads => Arguments.SelectMany(a => a.Reads);
 

@@ -9,14 +9,15 @@ internal sealed class ReciprocalExpr : Expr
     {
         Denominator = denominator;
         Key = "1/(" + denominator.Key + ")";
-        ShapeKey = "1/(" + denominator.ShapeKey + ")";
     }
+
+    private string? _shapeKey;
 
     public SumExpr Denominator { get; }
 
     public override string Key { get; }
 
-    public override string ShapeKey { get; }
+    public override string ShapeKey => _shapeKey ??= "1/(" + Denominator.ShapeKey + ")";
 
     public override IEnumerable<ReadExpr> Reads => Denominator.Reads;
 

@@ -14,20 +14,19 @@ internal sealed class SumExpr
     /// <summary>Expansion stops beyond this many terms (the checker then says it could not model the update).</summary>
     public const int MaxTerms = 512;
 
-    private SumExpr(ImmutableArray<Term> terms)
-    {
-        Terms = terms;
-        Key = string.Join("+", terms.Select(t => "(" + t.Coefficient + ")" + t.BodyKey));
-        ShapeKey = string.Join("+", terms.Select(t => t.BodyShapeKey).OrderBy(s => s, StringComparer.Ordinal));
-    }
+    private string? _key;
+    private string? _shapeKey;
+
+    private SumExpr(ImmutableArray<Term> terms) => Terms = terms;
 
     public static SumExpr Zero { get; } = new(ImmutableArray<Term>.Empty);
 
     public ImmutableArray<Term> Terms { get; }
 
-    public string Key { get; }
+    /// <summary>Full identity (computed on first use: most intermediate sums never need it).</summary>
+    public string Key => _key ??= string.Join("+", Terms.Select(t => "(" + t.Coefficient + ")" + t.BodyKey));
 
-    public string ShapeKey { get; }
+    public string ShapeKey => _shapeKey ??= string.Join("+", Terms.Select(t => t.BodyShapeKey).OrderBy(s => s, StringComparer.Ordinal));
 
     public bool IsZero => Terms.IsEmpty;
 

@@ -17,9 +17,10 @@ internal sealed class Term
         Coefficient = coefficient;
         Factors = factors.OrderBy(f => f.Key, StringComparer.Ordinal).ToImmutableArray();
         Origins = origins.IsDefault ? ImmutableArray<int>.Empty : origins;
-        BodyKey = string.Join("*", Factors.Select(f => f.Key));
-        BodyShapeKey = string.Join("*", Factors.Select(f => f.ShapeKey).OrderBy(s => s, StringComparer.Ordinal));
+        BodyKey = Factors.Length == 1 ? Factors[0].Key : string.Join("*", Factors.Select(f => f.Key));
     }
+
+    private string? _bodyShapeKey;
 
     public SymPoly Coefficient { get; }
 
@@ -30,7 +31,7 @@ internal sealed class Term
 
     public string BodyKey { get; }
 
-    public string BodyShapeKey { get; }
+    public string BodyShapeKey => _bodyShapeKey ??= string.Join("*", Factors.Select(f => f.ShapeKey).OrderBy(s => s, StringComparer.Ordinal));
 
     public bool IsInvariant => Factors.IsEmpty;
 

@@ -37,9 +37,12 @@ cat > "$WORK/Bench.csproj" <<XML
 XML
 cd "$WORK"
 dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=true > /dev/null   # warm: restore and build references
+dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=false > /dev/null
 for mode in false true; do
+  # References are up to date: touching the kernels makes the compiler run on the benchmark project only.
+  touch Kernels/*.cs
   start=$(date +%s.%N)
-  dotnet build Bench.csproj -c Release --no-incremental -p:WithFvGenAnalyzers=$mode -p:ReportAnalyzer=true -v:d > "build-$mode.log"
+  dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=$mode -p:ReportAnalyzer=true -v:d > "build-$mode.log"
   end=$(date +%s.%N)
   echo "analyzers=$mode: build $(echo "$end - $start" | bc) s"
 done
