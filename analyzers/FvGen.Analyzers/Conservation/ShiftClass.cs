@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using System.Collections.Immutable;
 using System.Linq;
@@ -32,11 +33,17 @@ internal sealed class ShiftClass
     public static List<ShiftClass> Build(IEnumerable<AttributedTerm> terms, LoopSpace space)
     {
         var classes = new List<ShiftClass>();
+        var byShape = new Dictionary<string, List<ShiftClass>>(StringComparer.Ordinal);
         var empty = ImmutableDictionary<string, long>.Empty;
         foreach (var t in terms)
         {
             bool placed = false;
-            foreach (var c in classes)
+            if (!byShape.TryGetValue(t.Term.BodyShapeKey, out var sameShape))
+            {
+                byShape[t.Term.BodyShapeKey] = sameShape = new List<ShiftClass>();
+            }
+
+            foreach (var c in sameShape)
             {
                 var match = ShiftMatcher.TryMatch(c.Representative.Term, t.Term, space);
                 if (match is not null)
@@ -49,7 +56,9 @@ internal sealed class ShiftClass
 
             if (!placed)
             {
-                classes.Add(new ShiftClass(new ClassMember(t, empty, 1)));
+                var created = new ShiftClass(new ClassMember(t, empty, 1));
+                classes.Add(created);
+                sameShape.Add(created);
             }
         }
 

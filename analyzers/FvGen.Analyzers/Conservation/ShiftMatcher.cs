@@ -65,9 +65,11 @@ internal static class ShiftMatcher
             return a.BodyKey == b.BodyKey ? new Match(ImmutableDictionary<string, long>.Empty, 1) : null;
         }
 
+        // Many reads of B share A's first read's shape (u[•] in a limiter); each distinct shift is tried once.
+        var tried = new HashSet<string>(StringComparer.Ordinal);
         foreach (var candidate in b.Reads)
         {
-            if (candidate.ShapeKey != first.ShapeKey)
+            if (candidate.ShapeKey != first.ShapeKey || !tried.Add(candidate.Key))
             {
                 continue;
             }
@@ -83,19 +85,24 @@ internal static class ShiftMatcher
         return null;
     }
 
-    /// <summary>Antisymmetric flips and reciprocals (whose normalised sign may differ after a shift) need the full alignment search.</summary>
+    /// <summary>Only antisymmetric flips need the full alignment search; everything else is canonical.</summary>
     private static bool NeedsAlignment(Term a) => a.Factors.Any(NeedsAlignment);
 
     private static bool NeedsAlignment(Expr e) => e switch
     {
         CallExpr c => c.Symmetry == CallSymmetry.Antisymmetric || c.Arguments.Any(s => s.Terms.Any(NeedsAlignment)),
-        ReciprocalExpr => true,
+        ReciprocalExpr r => r.Denominator.Terms.Any(NeedsAlignment),
         _ => false,
     };
 
     /// <summary>The integer shift vector that maps every first index of a pair onto its second, or null.</summary>
     public static ImmutableDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
     {
+        if (pairs.All(p => p.A.Constant.IsConstant && p.B.Constant.IsConstant && p.A.Linear.All(l => l.Value.IsConstant)))
+        {
+            return SolveConstant(pairs, space);
+        }
+
         var unknowns = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
         var rowsByMonomial = new List<Rational[]>();
         foreach (var (a, b) in pairs)
@@ -129,6 +136,48 @@ internal static class ShiftMatcher
         }
 
         var x = LinearSolver.Solve(rowsByMonomial, unknowns.Count);
+        if (x is null || x.Any(value => !value.IsInteger))
+        {
+            return null;
+        }
+
+        var result = ImmutableDictionary.CreateBuilder<string, long>(StringComparer.Ordinal);
+        for (int k = 0; k < unknowns.Count; k++)
+        {
+            result[unknowns[k].Name] = (long)x[k].Numerator * unknowns[k].Step;
+        }
+
+        return result.ToImmutable();
+    }
+
+    /// <summary>The same system when no index carries a symbol (the common case): one row per pair.</summary>
+    private static ImmutableDictionary<string, long>? SolveConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    {
+        var unknowns = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
+        var rows = new List<Rational[]>(pairs.Count);
+        foreach (var (a, b) in pairs)
+        {
+            if (a.LinearKey != b.LinearKey)
+            {
+                return null;
+            }
+
+            var row = new Rational[unknowns.Count + 1];
+            for (int k = 0; k < unknowns.Count; k++)
+            {
+                row[k] = a.CoefficientOf(unknowns[k].Name).ConstantValue * Rational.FromInteger(unknowns[k].Step);
+            }
+
+            row[unknowns.Count] = b.Constant.ConstantValue - a.Constant.ConstantValue;
+            if (row.All(r => r.IsZero))
+            {
+                continue;
+            }
+
+            rows.Add(row);
+        }
+
+        var x = rows.Count == 0 ? new Rational[unknowns.Count].Select(_ => Rational.Zero).ToArray() : LinearSolver.Solve(rows, unknowns.Count);
         if (x is null || x.Any(value => !value.IsInteger))
         {
             return null;

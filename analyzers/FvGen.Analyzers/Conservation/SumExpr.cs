@@ -46,18 +46,19 @@ internal sealed class SumExpr
 
     public static SumExpr Of(IEnumerable<Term> terms)
     {
-        var byBody = new Dictionary<string, (SymPoly Coefficient, Term First, List<int> Origins)>(StringComparer.Ordinal);
+        var byBody = new Dictionary<string, (SymPoly Coefficient, Term First, List<int>? Origins)>(StringComparer.Ordinal);
         var order = new List<string>();
         foreach (var t in terms)
         {
             if (byBody.TryGetValue(t.BodyKey, out var current))
             {
-                current.Origins.AddRange(t.Origins);
-                byBody[t.BodyKey] = (current.Coefficient + t.Coefficient, current.First, current.Origins);
+                var origins = current.Origins ?? new List<int>(current.First.Origins);
+                origins.AddRange(t.Origins);
+                byBody[t.BodyKey] = (current.Coefficient + t.Coefficient, current.First, origins);
             }
             else
             {
-                byBody[t.BodyKey] = (t.Coefficient, t, new List<int>(t.Origins));
+                byBody[t.BodyKey] = (t.Coefficient, t, null);
                 order.Add(t.BodyKey);
             }
         }
@@ -71,7 +72,7 @@ internal sealed class SumExpr
             .OrderBy(k => k, StringComparer.Ordinal)
             .Select(k => byBody[k])
             .Where(e => !e.Coefficient.IsZero)
-            .Select(e => new Term(e.Coefficient, e.First.Factors, e.Origins.Distinct().ToImmutableArray()))
+            .Select(e => e.Origins is null ? e.First : new Term(e.Coefficient, e.First.Factors, e.Origins.Distinct().ToImmutableArray()))
             .ToImmutableArray();
         return new SumExpr(result);
     }
@@ -162,6 +163,9 @@ internal sealed class SumExpr
     }
 
     public SumExpr Shift(IReadOnlyDictionary<string, long> shift) => Of(Terms.Select(t => t.Shift(shift)));
+
+    /// <summary>An invariant that is a true sum (not a monomial) stands for itself as one opaque symbol.</summary>
+    public static SymPoly OpaqueInvariant(SymPoly value) => SymPoly.Symbol("(" + CSharpText.Of(value) + ")");
 
     public SumExpr StripOrigins() => new(Terms.Select(t => new Term(t.Coefficient, t.Factors, ImmutableArray<int>.Empty)).ToImmutableArray());
 

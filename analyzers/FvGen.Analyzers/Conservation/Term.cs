@@ -15,12 +15,26 @@ internal sealed class Term
     public Term(SymPoly coefficient, IEnumerable<Expr> factors, ImmutableArray<int> origins)
     {
         Coefficient = coefficient;
-        Factors = factors.OrderBy(f => f.Key, StringComparer.Ordinal).ToImmutableArray();
+        var list = factors as IReadOnlyList<Expr> ?? factors.ToList();
+        Factors = IsSorted(list) ? list.ToImmutableArray() : list.OrderBy(f => f.Key, StringComparer.Ordinal).ToImmutableArray();
         Origins = origins.IsDefault ? ImmutableArray<int>.Empty : origins;
         BodyKey = Factors.Length == 1 ? Factors[0].Key : string.Join("*", Factors.Select(f => f.Key));
     }
 
     private string? _bodyShapeKey;
+
+    private static bool IsSorted(IReadOnlyList<Expr> factors)
+    {
+        for (int k = 1; k < factors.Count; k++)
+        {
+            if (string.CompareOrdinal(factors[k - 1].Key, factors[k].Key) > 0)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
 
     public SymPoly Coefficient { get; }
 
@@ -39,7 +53,32 @@ internal sealed class Term
 
     public Term WithCoefficient(SymPoly coefficient) => new(coefficient, Factors, Origins);
 
-    public Term Shift(IReadOnlyDictionary<string, long> shift) => new(Coefficient, Factors.Select(f => f.Shift(shift)), Origins);
+    /// <summary>
+    /// The term at iteration <c>i + n</c>. A reciprocal is normalised again (its leading coefficient
+    /// pulled out), exactly as the extraction builds it, so equal terms keep equal keys.
+    /// </summary>
+    public Term Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var coefficient = Coefficient;
+        var factors = new List<Expr>(Factors.Length);
+        foreach (var f in Factors)
+        {
+            if (f is ReciprocalExpr r)
+            {
+                var normalised = r.Denominator.Shift(shift).Reciprocal(SumExpr.OpaqueInvariant);
+                if (normalised.Terms.Length == 1)
+                {
+                    coefficient *= normalised.Terms[0].Coefficient;
+                    factors.AddRange(normalised.Terms[0].Factors);
+                    continue;
+                }
+            }
+
+            factors.Add(f.Shift(shift));
+        }
+
+        return new Term(coefficient, factors, Origins);
+    }
 
     /// <summary>C# text of the body (<c>1</c> when there is none).</summary>
     public string RenderBody() => Factors.IsEmpty ? "1" : string.Join(" * ", Factors.Select(f => f is ReciprocalExpr ? "(" + f.Render() + ")" : f.Render()));

@@ -440,7 +440,7 @@ internal sealed class ExpressionReader
 
     private static SumExpr Reciprocal(SumExpr value) => value.Reciprocal(OpaqueInvariant);
 
-    public static SymPoly OpaqueInvariant(SymPoly value) => SymPoly.Symbol("(" + CSharpText.Of(value) + ")");
+    public static SymPoly OpaqueInvariant(SymPoly value) => SumExpr.OpaqueInvariant(value);
 
     private static SumExpr Constant(object value, SyntaxNode syntax)
     {

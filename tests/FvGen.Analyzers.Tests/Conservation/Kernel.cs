@@ -43,7 +43,7 @@ internal static class Kernel
     public static SumExpr Call(string function, CallSymmetry symmetry, params SumExpr[] arguments) =>
         SumExpr.Factor(new CallExpr(function, arguments.Select(a => a.StripOrigins()).ToImmutableArray(), symmetry), _origin++);
 
-    public static SumExpr Div(SumExpr a, SumExpr b) => a * b.Reciprocal(p => SymPoly.Symbol("(" + p + ")"));
+    public static SumExpr Div(SumExpr a, SumExpr b) => a * b.Reciprocal(SumExpr.OpaqueInvariant);
 
     public static UpdateWrite Increment(string array, ImmutableArray<ImmutableArray<IndexTerm>> cell, SumExpr value) =>
         new(array, string.Empty, cell, value, false, _origin++);
