@@ -61,6 +61,12 @@ internal sealed class PurityChecker
             return IsTrustedMetadata(method) ? Purity.Pure : new Purity(PurityKind.Unknown, string.Empty, null);
         }
 
+        if (method.IsAbstract || method.IsExtern || method.MethodKind == MethodKind.DelegateInvoke)
+        {
+            // An interface or abstract member: whichever implementation runs is not known here.
+            return new Purity(PurityKind.Unknown, string.Empty, null);
+        }
+
         if (depth > MaxDepth)
         {
             return new Purity(PurityKind.Unknown, string.Empty, null);
