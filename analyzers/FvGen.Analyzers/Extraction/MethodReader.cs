@@ -23,7 +23,7 @@ internal static class MethodReader
         MarkDefinitions(nests, method);
         foreach (var (loop, bindings) in nests)
         {
-            if (IsDefinition(loop, bindings, method, nests) || !WritesElements(loop))
+            if (IsDefinition(loop, bindings, method) || !WritesElements(loop))
             {
                 // A definition fills face data; a loop writing no array element (a reduction such as
                 // the largest wave speed) updates nothing that could be conservative or not.
@@ -189,7 +189,7 @@ internal static class MethodReader
         }
     }
 
-    private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method, List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests)
+    private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
     {
         var (written, _, _, onlyAssigned) = Accesses(loop, outer, method);
         return written.Count > 0 && onlyAssigned && written.All(method.FaceArrays.Contains);
