@@ -4,7 +4,7 @@ using Microsoft.CodeAnalysis.Diagnostics;
 
 namespace FvGen.Analyzers.Tests;
 
-/// <summary>Every rule has a page under docs/rules, every page a rule, and the help link points at it.</summary>
+/// <summary>Every FVC rule has a page under docs/rules, every FVC page a rule, and the help link points at it (FVG pages belong to the generator).</summary>
 public sealed class RuleDocumentationTests
 {
     private static readonly string RulesDirectory = Path.Combine(RepositoryRoot(), "docs", "rules");
@@ -19,7 +19,7 @@ public sealed class RuleDocumentationTests
     public void EveryRuleHasAPageAndEveryPageARule()
     {
         var ids = Descriptors().Select(d => d.Id).ToHashSet();
-        var pages = Directory.GetFiles(RulesDirectory, "*.md").Select(Path.GetFileNameWithoutExtension).ToHashSet();
+        var pages = Directory.GetFiles(RulesDirectory, "FVC*.md").Select(Path.GetFileNameWithoutExtension).ToHashSet();
         Assert.Equal(ids.OrderBy(x => x), pages.OrderBy(x => x)!);
     }
 
@@ -36,7 +36,7 @@ public sealed class RuleDocumentationTests
     [Fact]
     public void PagesHaveTheRequiredSections()
     {
-        foreach (var page in Directory.GetFiles(RulesDirectory, "*.md"))
+        foreach (var page in Directory.GetFiles(RulesDirectory, "FVC*.md"))
         {
             string text = File.ReadAllText(page);
             string id = Path.GetFileNameWithoutExtension(page);
