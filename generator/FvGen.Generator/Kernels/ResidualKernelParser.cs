@@ -484,10 +484,9 @@ internal static class ResidualKernelParser
             return strayBuffer ? "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather" : null;
         }
 
-        if (mesh == MeshKind.Structured1D || (mesh != MeshKind.Unstructured && mode == KernelMode.ParallelGather))
+        if (mesh == MeshKind.Structured1D && mode == KernelMode.ParallelColouredScatter)
         {
-            return "ExecutionMode." + mode + " is generated for unstructured meshes"
-                + (mode == KernelMode.ParallelGather ? " (structured 2-D and 3-D grids run ParallelColouredScatter, by slabs)" : "; a 1-D grid has no slabs to share out, use SerialScatter");
+            return "ExecutionMode.ParallelColouredScatter is generated for unstructured meshes and 2-D and 3-D structured grids; a 1-D grid has no slabs to share out, use ParallelGather or SerialScatter";
         }
 
         if (!parameters.Any(p => p.Role == ParameterRole.State && p.IsMemory) || !parameters.Any(p => p.Role == ParameterRole.Residual && p.IsMemory))

@@ -79,6 +79,16 @@ public static partial class ShallowWater
     public static partial void MusclSlabs2D(
         StructuredGrid2D grid, ReadOnlyMemory<WaterState> state, Memory<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
 
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral, Mode = ExecutionMode.ParallelGather)]
+    public static partial void MusclGather2D(
+        StructuredGrid2D grid,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options);
+
     [ResidualKernel(nameof(Rusanov))]
     public static partial void Serial(UnstructuredMesh mesh, ReadOnlySpan<WaterState> state, Span<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 

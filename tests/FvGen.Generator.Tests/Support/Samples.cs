@@ -103,6 +103,32 @@ internal static class Samples
         }
         """;
 
+    public const string Gather2D = """
+        using System;
+        using System.Threading.Tasks;
+        using FvGen;
+        using FvGen.Boundaries;
+        using FvGen.Geometry;
+        using FvGen.Ledger;
+        using FvGen.Meshes.Structured;
+
+        namespace Demo;
+
+        public static partial class Mixing
+        {
+            [NumericalFlux(Antisymmetric = true)]
+            public static Heat TwoPoint(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = -(right.Energy - left.Energy) / face.CentreDistance };
+
+            [BoundaryFlux(BoundaryKind.Wall)]
+            public static Heat Insulated(in Heat inside, in FaceGeometry face) => default;
+
+            [ResidualKernel(nameof(TwoPoint), Mode = ExecutionMode.ParallelGather)]
+            public static partial void Residual(
+                StructuredGrid2D grid, ReadOnlyMemory<Heat> state, Memory<Heat> rate, [FaceData] Memory<Heat> faceFlux, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+        }
+        """;
+
     /// <summary>A second, independent kernel in a file of its own (for caching tests).</summary>
     public const string Other = """
         using System;
