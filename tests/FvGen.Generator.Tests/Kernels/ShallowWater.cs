@@ -165,6 +165,18 @@ public static partial class ShallowWater
         ParallelOptions options,
         ExecutionMode mode);
 
+    /// <summary>MUSCL on a 2-D grid, the mode chosen by the caller at run time (all three are available).</summary>
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral)]
+    public static partial void MusclAnyMode2D(
+        StructuredGrid2D grid,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options,
+        ExecutionMode mode);
+
     [ResidualKernel(nameof(Rusanov))]
     public static partial void AnyMode1D(StructuredGrid1D grid, ReadOnlySpan<WaterState> state, Span<WaterState> residual, BoundaryBinding<Boundary> boundaries, ExecutionMode mode);
 
