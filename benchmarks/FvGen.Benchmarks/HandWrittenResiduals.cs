@@ -202,7 +202,10 @@ public static class HandWrittenResiduals
         }
     }
 
-    /// <summary>1-D periodic MUSCL with the van Leer limiter (LeVeque 2002, ch. 6), component by component.</summary>
+    /// <summary>
+    /// 1-D periodic MUSCL with the van Leer limiter (LeVeque 2002, ch. 6), component by component, with
+    /// slopes over centre distances and extrapolation by half a width (stretched-grid form, common practice).
+    /// </summary>
     public static void Muscl1D(StructuredGrid1D grid, ReadOnlySpan<Water> u, Span<Water> r)
     {
         int n = grid.Nx;
@@ -214,13 +217,16 @@ public static class HandWrittenResiduals
             int left = f == 0 ? n - 1 : f - 1, right = f;
             int leftLeft = left == 0 ? n - 1 : left - 1, rightRight = right == n - 1 ? 0 : right + 1;
             Water a = u[leftLeft], b = u[left], c = u[right], d = u[rightRight];
+            double dLL = 0.5 * (dx[leftLeft] + dx[left]), dLR = 0.5 * (dx[left] + dx[right]), dRR = 0.5 * (dx[right] + dx[rightRight]);
+            double ratioL = dLL / dLR, reachL = 0.5 * dx[left] / dLL;
+            double ratioR = dLR / dRR, reachR = 0.5 * dx[right] / dLR;
             Water lf = b, rf = c;
-            lf.Depth += 0.5 * VanLeer(b.Depth - a.Depth, c.Depth - b.Depth);
-            lf.Flow.X += 0.5 * VanLeer(b.Flow.X - a.Flow.X, c.Flow.X - b.Flow.X);
-            lf.Flow.Y += 0.5 * VanLeer(b.Flow.Y - a.Flow.Y, c.Flow.Y - b.Flow.Y);
-            rf.Depth -= 0.5 * VanLeer(c.Depth - b.Depth, d.Depth - c.Depth);
-            rf.Flow.X -= 0.5 * VanLeer(c.Flow.X - b.Flow.X, d.Flow.X - c.Flow.X);
-            rf.Flow.Y -= 0.5 * VanLeer(c.Flow.Y - b.Flow.Y, d.Flow.Y - c.Flow.Y);
+            lf.Depth += reachL * VanLeer(b.Depth - a.Depth, c.Depth - b.Depth, ratioL);
+            lf.Flow.X += reachL * VanLeer(b.Flow.X - a.Flow.X, c.Flow.X - b.Flow.X, ratioL);
+            lf.Flow.Y += reachL * VanLeer(b.Flow.Y - a.Flow.Y, c.Flow.Y - b.Flow.Y, ratioL);
+            rf.Depth -= reachR * VanLeer(c.Depth - b.Depth, d.Depth - c.Depth, ratioR);
+            rf.Flow.X -= reachR * VanLeer(c.Flow.X - b.Flow.X, d.Flow.X - c.Flow.X, ratioR);
+            rf.Flow.Y -= reachR * VanLeer(c.Flow.Y - b.Flow.Y, d.Flow.Y - c.Flow.Y, ratioR);
             double distance = f == 0 ? 0.5 * (dx[n - 1] + dx[0]) : xc[f] - xc[f - 1];
             var face = new FaceGeometry(new Vec3(1, 0, 0), 1.0, new Vec3(xn[f], 0, 0), distance);
             Water flux = ShallowWaterPhysics.Rusanov(in lf, in rf, in face);
@@ -234,14 +240,14 @@ public static class HandWrittenResiduals
         }
     }
 
-    private static double VanLeer(double backward, double forward)
+    private static double VanLeer(double backward, double forward, double distanceRatio)
     {
         if (backward * forward <= 0.0)
         {
             return 0.0;
         }
 
-        double theta = forward / backward;
+        double theta = forward / backward * distanceRatio;
         return (theta + Math.Abs(theta)) / (1.0 + Math.Abs(theta)) * backward;
     }
 

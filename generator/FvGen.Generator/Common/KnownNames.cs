@@ -9,6 +9,7 @@ internal static class KnownNames
     public const string ResidualKernelAttribute = "FvGen.ResidualKernelAttribute";
     public const string FaceDataAttribute = "FvGen.FaceDataAttribute";
     public const string FaceGeometry = "FvGen.Geometry.FaceGeometry";
+    public const string Vec3 = "FvGen.Geometry.Vec3";
     public const string GradientOpen = "FvGen.Geometry.Gradient<TState>";
     public const string StructuredGrid1D = "FvGen.Meshes.Structured.StructuredGrid1D";
     public const string StructuredGrid2D = "FvGen.Meshes.Structured.StructuredGrid2D";

@@ -28,7 +28,8 @@ internal static class KernelEmitter
             MeshKind.Structured3D => "StructuredGrid3D",
             _ => "UnstructuredMesh",
         };
-        string order = model.Reconstruction == KernelReconstruction.User ? "user reconstruction " + model.UserReconstruction?.Name
+        string order = model.Reconstruction == KernelReconstruction.User
+                ? "user reconstruction " + model.UserReconstruction?.Name + (model.Mesh == MeshKind.Unstructured ? " from Green-Gauss gradients limited by Barth-Jespersen" : "")
             : model.Reconstruction != KernelReconstruction.Linear ? "first order"
             : model.Mesh == MeshKind.Unstructured ? "linear reconstruction, Green-Gauss gradients, Barth-Jespersen limiter"
             : "MUSCL, " + model.Limiter + " limiter";

@@ -43,9 +43,9 @@ internal sealed record ResidualKernelModel(
 {
     /// <summary>
     /// True when the kernel computes Green–Gauss cell gradients first: for a flux that takes gradients
-    /// (any mesh), or for linear reconstruction on an unstructured mesh.
+    /// (any mesh), or for linear or user reconstruction on an unstructured mesh.
     /// </summary>
-    public bool NeedsGradients => Flux.TakesGradients || (Mesh == MeshKind.Unstructured && Reconstruction == KernelReconstruction.Linear);
+    public bool NeedsGradients => Flux.TakesGradients || (Mesh == MeshKind.Unstructured && Reconstruction != KernelReconstruction.FirstOrder);
 }
 
 /// <summary>One parameter of a kernel.</summary>

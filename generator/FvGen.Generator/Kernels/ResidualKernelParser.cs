@@ -245,29 +245,35 @@ internal static class ResidualKernelParser
         {
             string? userName = NamedString(attribute, "UserReconstruction");
             string? why = null;
-            user = userName is null ? null : UserReconstructionCall(type, userName, stateSymbol, out why);
+            bool unstructured = mesh.Value == MeshKind.Unstructured;
+            user = userName is null ? null
+                : unstructured ? UnstructuredUserReconstructionCall(type, userName, stateSymbol, out why)
+                : UserReconstructionCall(type, userName, stateSymbol, out why);
             if (user is null)
             {
+                string n = stateSymbol.Name;
+                string expected = unstructured
+                    ? "static void " + userName + "(in " + n + " cell, in Gradient<" + n + "> gradient, in Vec3 toFace, out " + n + " faceState)"
+                    : "static void " + userName + "(in " + n + " leftLeft, in " + n + " left, in " + n + " right, in " + n + " rightRight, out " + n + " leftFace, out " + n + " rightFace)";
                 problems?.Add(new Problem(
                     Descriptors.ReconstructionNotAvailable,
                     location,
                     method.Name,
                     userName is null
                         ? "ReconstructionKind.User needs UserReconstruction = nameof(...) naming a static method of " + type.Name
-                        : "user reconstruction '" + userName + "' must be 'static void " + userName + "(in " + stateSymbol.Name + " leftLeft, in " + stateSymbol.Name + " left, in "
-                            + stateSymbol.Name + " right, in " + stateSymbol.Name + " rightRight, out " + stateSymbol.Name + " leftFace, out " + stateSymbol.Name + " rightFace)' in " + type.Name + ": " + why));
+                        : "user reconstruction '" + userName + "' must be '" + expected + "' in " + type.Name + (unstructured ? " on an unstructured mesh" : " on a structured grid") + ": " + why));
                 return null;
             }
         }
 
-        bool needsGradients = flux.Value.Call.TakesGradients || (mesh.Value == MeshKind.Unstructured && reconstruction == KernelReconstruction.Linear);
+        bool needsGradients = flux.Value.Call.TakesGradients || (mesh.Value == MeshKind.Unstructured && reconstruction != KernelReconstruction.FirstOrder);
         var gradientBuffer = parameters.FirstOrDefault(p => p.Role == ParameterRole.GradientBuffer);
         string? gradientProblem = (needsGradients, gradientBuffer) switch
         {
             (true, null) => "it computes Green-Gauss cell gradients ("
-                + (reconstruction == KernelReconstruction.Linear ? "linear reconstruction" : "its flux takes gradients")
+                + (reconstruction == KernelReconstruction.Linear ? "linear reconstruction" : reconstruction == KernelReconstruction.User && mesh.Value == MeshKind.Unstructured ? "user reconstruction on an unstructured mesh" : "its flux takes gradients")
                 + "), so it needs a gradient buffer: add a 'Span<Gradient<" + stateSymbol.Name + ">>' parameter ('Memory<...>' in parallel modes) of one gradient per cell",
-            (false, not null) => "gradient buffer '" + gradientBuffer.Name + "' is used only by fluxes that take gradients, and by linear reconstruction on unstructured meshes",
+            (false, not null) => "gradient buffer '" + gradientBuffer.Name + "' is used only by fluxes that take gradients, and by linear or user reconstruction on unstructured meshes",
             (true, { IsMemory: false }) when mode != KernelMode.SerialScatter && !parameters.Any(p => p.Role == ParameterRole.Mode) => "in ExecutionMode." + mode + " the gradient buffer '" + gradientBuffer!.Name + "' must be a Memory<Gradient<" + stateSymbol.Name + ">>",
             _ => null,
         };
@@ -320,12 +326,57 @@ internal static class ResidualKernelParser
                 continue;
             }
 
+            if (p.Take(4).Any(x => x.RefKind != p[0].RefKind))
+            {
+                why = "the four cell states must all be passed the same way (all by value or all 'in')";
+                continue;
+            }
+
             why = null;
             return new FluxCall(candidate.Name, p[0].RefKind == RefKind.In ? "in " : "", "out ");
         }
 
         return null;
     }
+
+    /// <summary>
+    /// Finds the unstructured user reconstruction <paramref name="name"/> in <paramref name="type"/>:
+    /// <c>static void R(in TState cell, in Gradient&lt;TState&gt; gradient, in Vec3 toFace, out TState faceState)</c>.
+    /// </summary>
+    /// <returns>A call whose <c>StateModifier</c>, <c>GradientModifier</c> and <c>FaceModifier</c> are those of the cell, gradient and offset parameters.</returns>
+    private static FluxCall? UnstructuredUserReconstructionCall(INamedTypeSymbol type, string name, ITypeSymbol state, out string? why)
+    {
+        why = "no static method of that name";
+        foreach (var candidate in type.GetMembers(name).OfType<IMethodSymbol>())
+        {
+            var p = candidate.Parameters;
+            if (!candidate.IsStatic || !candidate.ReturnsVoid || candidate.IsGenericMethod || p.Length != 4)
+            {
+                why = "it must be static, return void and take four parameters";
+                continue;
+            }
+
+            if (!SymbolEqualityComparer.Default.Equals(p[0].Type, state) || !FluxSignature.IsGradientOf(p[1].Type, state)
+                || p[2].Type.ToDisplayString() != KnownNames.Vec3 || !SymbolEqualityComparer.Default.Equals(p[3].Type, state))
+            {
+                why = "the parameters must be the cell state, its Gradient<" + state.Name + ">, the Vec3 from the cell centroid to the face centroid, and the face state";
+                continue;
+            }
+
+            if (p.Take(3).Any(x => x.RefKind is not (RefKind.None or RefKind.In)) || p[3].RefKind != RefKind.Out)
+            {
+                why = "the cell state, gradient and offset are passed by value or 'in', the face state is 'out'";
+                continue;
+            }
+
+            why = null;
+            return new FluxCall(candidate.Name, Modifier(p[0]), Modifier(p[2]), Modifier(p[1]));
+        }
+
+        return null;
+    }
+
+    private static string Modifier(IParameterSymbol p) => p.RefKind == RefKind.In ? "in " : "";
 
     private static string? NamedString(AttributeData attribute, string name)
     {
@@ -484,10 +535,9 @@ internal static class ResidualKernelParser
             return strayBuffer ? "a [FaceData] face buffer is used only by ExecutionMode.ParallelGather" : null;
         }
 
-        if (mesh == MeshKind.Structured1D || (mesh != MeshKind.Unstructured && mode == KernelMode.ParallelGather))
+        if (mesh == MeshKind.Structured1D && mode == KernelMode.ParallelColouredScatter)
         {
-            return "ExecutionMode." + mode + " is generated for unstructured meshes"
-                + (mode == KernelMode.ParallelGather ? " (structured 2-D and 3-D grids run ParallelColouredScatter, by slabs)" : "; a 1-D grid has no slabs to share out, use SerialScatter");
+            return "ExecutionMode.ParallelColouredScatter is generated for unstructured meshes and 2-D and 3-D structured grids; a 1-D grid has no slabs to share out, use ParallelGather or SerialScatter";
         }
 
         if (!parameters.Any(p => p.Role == ParameterRole.State && p.IsMemory) || !parameters.Any(p => p.Role == ParameterRole.Residual && p.IsMemory))
@@ -525,7 +575,6 @@ internal static class ResidualKernelParser
         return reconstruction switch
         {
             KernelReconstruction.FirstOrder => null,
-            KernelReconstruction.User when mesh == MeshKind.Unstructured => "ReconstructionKind.User is generated for structured grids only (a four-cell stencil along each direction); use Linear (Barth-Jespersen) on unstructured meshes",
             KernelReconstruction.User => null,
             _ when mesh == MeshKind.Unstructured && limiter != KernelLimiter.BarthJespersen =>
                 "linear reconstruction on unstructured meshes is limited by Barth-Jespersen; the " + limiter + " limiter is for MUSCL on structured grids",

@@ -5,16 +5,20 @@ namespace FvGen.Generator.Structured;
 
 /// <summary>
 /// Writes MUSCL face states on structured grids: each cell's slope along the face direction is the
-/// backward difference times a limiter φ(θ) of the ratio θ of forward to backward differences,
-/// component by component, and the face sees each cell's value extrapolated half a cell.
+/// backward slope times a limiter φ(θ) of the ratio θ of forward to backward slopes, component by
+/// component, and the face sees each cell's value extrapolated half its width.
 /// </summary>
 /// <remarks>
 /// Limiters as functions of θ (LeVeque, Finite Volume Methods for Hyperbolic Problems, 2002, ch. 6):
 /// minmod max(0, min(1, θ)); van Leer (θ + |θ|)/(1 + |θ|); MC max(0, min((1 + θ)/2, 2, 2θ));
 /// superbee max(0, min(1, 2θ), min(2, θ)). All are zero for θ ≤ 0, so a cell at an extremum keeps a
-/// zero slope. Slopes are taken in index space (exact for uniform spacing). A cell next to a
-/// boundary patch along the face direction has no second neighbour there and keeps a zero slope;
-/// boundary faces see the cell average.
+/// zero slope. On a stretched grid the slopes are differences over the centre distances and the
+/// extrapolation distance is half the cell's width (the extension of LeVeque's uniform-grid form to
+/// non-uniform spacing is common practice): with Δ⁻, Δ⁺ the backward and forward differences and
+/// d⁻, d⁺ the centre distances, θ = (Δ⁺/Δ⁻)(d⁻/d⁺) and the face increment is ±(w/2d⁻) φ(θ) Δ⁻. On
+/// uniform spacing d⁻/d⁺ = 1 and w/2d⁻ = 1/2 exactly, so the uniform-grid result is unchanged. A cell
+/// next to a boundary patch along the face direction has no second neighbour there and keeps a zero
+/// slope, so it is first order toward the patch; boundary faces see the cell average.
 /// </remarks>
 internal static class MusclEmitter
 {
@@ -22,15 +26,15 @@ internal static class MusclEmitter
     public static void DeclareLimiter(IndentedWriter w, ResidualKernelModel model)
     {
         w.Line();
-        w.Line("// " + model.Limiter + " limiter φ(θ), θ = forward / backward difference; the slope is φ(θ) · backward.");
+        w.Line("// " + model.Limiter + " limiter φ(θ), θ = (forward / backward difference) · (backward / forward centre distance); returns φ(θ) · backward.");
         w.Line("[global::System.Runtime.CompilerServices.MethodImpl(global::System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]");
-        w.Open("static double LimitedSlope(double backward, double forward)");
+        w.Open("static double LimitedSlope(double backward, double forward, double distanceRatio)");
         w.Line("if (backward * forward <= 0.0)");
         w.Open();
         w.Line("return 0.0;");
         w.Close();
         w.Line();
-        w.Line("double theta = forward / backward;");
+        w.Line("double theta = forward / backward * distanceRatio;");
         w.Line(model.Limiter switch
         {
             KernelLimiter.VanLeer => "double phi = (theta + global::System.Math.Abs(theta)) / (1.0 + global::System.Math.Abs(theta));",
@@ -63,25 +67,35 @@ internal static class MusclEmitter
         }
 
         // Copies, not refs: the JIT keeps the components of small struct locals in registers.
+        string widths = axis + "Widths";
         w.Line(s + " uL = state[" + left + "];");
         w.Line(s + " uR = state[" + right + "];");
         w.Line(s + " leftFace = uL;");
         w.Line(s + " rightFace = uR;");
+        w.Line("double widthL = " + widths + "[" + leftAlong + "];");
+        w.Line("double widthR = " + widths + "[" + rightAlong + "];");
+        w.Line("double distanceLR = 0.5 * (widthL + widthR);");
         w.Line("if (leftLeft >= 0)");
         w.Open();
         w.Line(s + " uLL = state[leftLeft];");
+        w.Line("double distanceLL = 0.5 * (" + widths + "[" + leftAlong + " >= 1 ? " + leftAlong + " - 1 : " + count + " - 1] + widthL);");
+        w.Line("double ratio = distanceLL / distanceLR;");
+        w.Line("double reach = 0.5 * widthL / distanceLL;");
         foreach (var c in model.State.Components)
         {
-            w.Line("leftFace." + c.Access + " += 0.5 * LimitedSlope(uL." + c.Access + " - uLL." + c.Access + ", uR." + c.Access + " - uL." + c.Access + ");");
+            w.Line("leftFace." + c.Access + " += reach * LimitedSlope(uL." + c.Access + " - uLL." + c.Access + ", uR." + c.Access + " - uL." + c.Access + ", ratio);");
         }
 
         w.Close();
         w.Line("if (rightRight >= 0)");
         w.Open();
         w.Line(s + " uRR = state[rightRight];");
+        w.Line("double distanceRR = 0.5 * (widthR + " + widths + "[" + rightAlong + " <= " + count + " - 2 ? " + rightAlong + " + 1 : 0]);");
+        w.Line("double ratio = distanceLR / distanceRR;");
+        w.Line("double reach = 0.5 * widthR / distanceLR;");
         foreach (var c in model.State.Components)
         {
-            w.Line("rightFace." + c.Access + " -= 0.5 * LimitedSlope(uR." + c.Access + " - uL." + c.Access + ", uRR." + c.Access + " - uR." + c.Access + ");");
+            w.Line("rightFace." + c.Access + " -= reach * LimitedSlope(uR." + c.Access + " - uL." + c.Access + ", uRR." + c.Access + " - uR." + c.Access + ", ratio);");
         }
 
         w.Close();

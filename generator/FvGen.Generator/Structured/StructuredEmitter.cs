@@ -24,6 +24,12 @@ internal static class StructuredEmitter
 
     public static void Emit(IndentedWriter w, ResidualKernelModel model)
     {
+        if (model.Mode == KernelMode.ParallelGather)
+        {
+            StructuredGatherEmitter.Emit(w, model);
+            return;
+        }
+
         int dim = (int)model.Mesh;
         bool parallel = model.Mode == KernelMode.ParallelColouredScatter;
         var state = KernelNames.Find(model, ParameterRole.State)!;
@@ -68,19 +74,19 @@ internal static class StructuredEmitter
             }
             else
             {
-                Interior(w, model, dim, d, slabAxis: null);
+                Interior(w, model, dim, d, Scatter, slabAxis: null);
             }
 
             w.Line();
             w.Open("if (mesh.IsPeriodic(" + d + "))");
-            Periodic(w, model, dim, d);
+            Periodic(w, model, dim, d, Scatter);
             w.Close();
             if (hasBoundaries)
             {
                 w.Open("else");
-                BoundarySide(w, model, dim, d, high: false);
+                BoundarySide(w, model, dim, d, high: false, ScatterInside);
                 w.Line();
-                BoundarySide(w, model, dim, d, high: true);
+                BoundarySide(w, model, dim, d, high: true, ScatterInside);
                 w.Close();
             }
         }
@@ -101,15 +107,25 @@ internal static class StructuredEmitter
                 + " mesh, global::System.ReadOnlySpan<" + s + "> state, global::System.Span<" + s + "> residual, "
                 + (model.NeedsGradients ? "global::System.ReadOnlySpan<global::FvGen.Geometry.Gradient<" + s + ">> gradients, " : "") + "int slab)");
             DeclareAxes(w, model, dim);
-            Interior(w, model, dim, d, SlabAxis(dim, d));
+            Interior(w, model, dim, d, Scatter, SlabAxis(dim, d));
             w.Close();
         }
     }
 
-    /// <summary>The axis whose slabs a parallel task owns for faces of direction <paramref name="d"/>: any other axis, the outermost one possible.</summary>
-    private static int SlabAxis(int dim, int d) => d == dim - 1 ? dim - 2 : dim - 1;
+    /// <summary>Applies a face flux to its two cells: taken from the left one, given to the right one.</summary>
+    private static void Scatter(IndentedWriter w)
+    {
+        w.Line("residual[left] -= flux;");
+        w.Line("residual[right] += flux;");
+    }
 
-    private static void DeclareAxes(IndentedWriter w, ResidualKernelModel model, int dim)
+    /// <summary>Applies a boundary face flux to its inside cell, which it leaves.</summary>
+    private static void ScatterInside(IndentedWriter w) => w.Line("residual[inside] -= flux;");
+
+    /// <summary>The axis whose slabs a parallel task owns for faces of direction <paramref name="d"/>: any other axis, the outermost one possible.</summary>
+    internal static int SlabAxis(int dim, int d) => d == dim - 1 ? dim - 2 : dim - 1;
+
+    internal static void DeclareAxes(IndentedWriter w, ResidualKernelModel model, int dim)
     {
         for (int a = 0; a < dim; a++)
         {
@@ -134,7 +150,12 @@ internal static class StructuredEmitter
         }
     }
 
-    private static void Interior(IndentedWriter w, ResidualKernelModel model, int dim, int d, int? slabAxis)
+    /// <summary>
+    /// Writes the interior faces of direction <paramref name="d"/>; <paramref name="apply"/> writes what is done
+    /// with each <c>flux</c> (flux · area from <c>left</c> to <c>right</c>). With <paramref name="slabAxis"/> only
+    /// one slab's faces, with <paramref name="range"/> only faces whose index along <paramref name="d"/> lies in it.
+    /// </summary>
+    internal static void Interior(IndentedWriter w, ResidualKernelModel model, int dim, int d, Action<IndentedWriter> apply, int? slabAxis, (string Start, string End)? range = null)
     {
         w.Line("// " + Axis[d] + " faces between cells (" + Index[d] + " - 1) and " + Index[d] + " along " + Axis[d] + ": interior faces, normal +" + Axis[d] + ".");
         Nest(w, dim, d, fixedIndex: null, body =>
@@ -144,12 +165,12 @@ internal static class StructuredEmitter
             body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, "1.0") + ", area, " + Centroid(dim, d, Index[d]) + ", "
                 + Axis[d] + "Centres[" + Index[d] + "] - " + Axis[d] + "Centres[" + Index[d] + " - 1]);");
             FaceFlux(body, model, d, "left", "right", Index[d] + " - 1", Index[d]);
-            body.Line("residual[left] -= flux;");
-            body.Line("residual[right] += flux;");
-        }, slabAxis);
+            apply(body);
+        }, slabAxis, range);
     }
 
-    private static void Periodic(IndentedWriter w, ResidualKernelModel model, int dim, int d)
+    /// <summary>Writes the periodic wrap faces of direction <paramref name="d"/> (index 0 along it), each <c>flux</c> handled by <paramref name="apply"/>.</summary>
+    internal static void Periodic(IndentedWriter w, ResidualKernelModel model, int dim, int d, Action<IndentedWriter> apply)
     {
         w.Line("// " + Axis[d] + " periodic faces: the last cell along " + Axis[d] + " (left) wraps to the first (right).");
         Nest(w, dim, d, fixedIndex: "0", body =>
@@ -159,12 +180,15 @@ internal static class StructuredEmitter
             body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, "1.0") + ", area, " + Centroid(dim, d, "0") + ", 0.5 * ("
                 + Axis[d] + "Widths[" + Count[d] + " - 1] + " + Axis[d] + "Widths[0]));");
             FaceFlux(body, model, d, "left", "right", Count[d] + " - 1", "0");
-            body.Line("residual[left] -= flux;");
-            body.Line("residual[right] += flux;");
+            apply(body);
         });
     }
 
-    private static void BoundarySide(IndentedWriter w, ResidualKernelModel model, int dim, int d, bool high)
+    /// <summary>
+    /// Writes the boundary faces of one side of direction <paramref name="d"/>: each <c>flux</c> (flux · area
+    /// out of the domain from cell <c>inside</c>) handled by <paramref name="apply"/> and summed into the patch's tally.
+    /// </summary>
+    internal static void BoundarySide(IndentedWriter w, ResidualKernelModel model, int dim, int d, bool high, Action<IndentedWriter> apply)
     {
         string s = model.State.FullyQualifiedName;
         string side = Side[2 * d + (high ? 1 : 0)];
@@ -182,7 +206,7 @@ internal static class StructuredEmitter
                 body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, high ? "1.0" : "-1.0") + ", area, " + Centroid(dim, d, node) + ", 0.5 * "
                     + Axis[d] + "Widths[" + Index[d] + "]);");
                 body.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, "state[inside]", "face") + " * area;");
-                body.Line("residual[inside] -= flux;");
+                apply(body);
                 body.Line("total += flux;");
             });
         });
@@ -209,7 +233,7 @@ internal static class StructuredEmitter
     /// runs from 1 (interior faces) or is fixed to <paramref name="fixedIndex"/> (one layer of faces).
     /// The face area is written as soon as the indices it needs are known.
     /// </summary>
-    private static void Nest(IndentedWriter w, int dim, int d, string? fixedIndex, Action<IndentedWriter> body, int? slabAxis = null)
+    private static void Nest(IndentedWriter w, int dim, int d, string? fixedIndex, Action<IndentedWriter> body, int? slabAxis = null, (string Start, string End)? range = null)
     {
         var areaAxes = new List<int>();
         for (int a = 0; a < dim; a++)
@@ -256,7 +280,14 @@ internal static class StructuredEmitter
             }
 
             string start = a == d ? "1" : "0";
-            w.Open("for (int " + Index[a] + " = " + start + "; " + Index[a] + " < " + Count[a] + "; " + Index[a] + "++)");
+            string end = Count[a];
+            if (a == d && range is { } r)
+            {
+                start = r.Start;
+                end = r.End;
+            }
+
+            w.Open("for (int " + Index[a] + " = " + start + "; " + Index[a] + " < " + end + "; " + Index[a] + "++)");
             opened++;
             bound.Add(a);
             WriteAreaIfReady();
@@ -269,7 +300,7 @@ internal static class StructuredEmitter
         }
     }
 
-    private static string CellIndex(int dim) => dim switch
+    internal static string CellIndex(int dim) => dim switch
     {
         1 => "i",
         2 => "i + nx * j",

@@ -22,7 +22,8 @@ internal static class GradientEmitter
     /// <summary>Writes the gradient pass: serially, or in parallel chunks of cells.</summary>
     public static void Emit(IndentedWriter w, ResidualKernelModel model, bool parallel)
     {
-        bool limited = model.Reconstruction == KernelReconstruction.Linear;
+        // Linear and user reconstruction both get the limited gradients (a user reconstruction may rescale them further).
+        bool limited = model.Reconstruction != KernelReconstruction.FirstOrder;
         string s = model.State.FullyQualifiedName;
         w.Line();
         w.Line("// Green-Gauss cell gradients" + (limited ? ", limited by Barth-Jespersen" : "") + "; each cell gathers its faces in the mesh's fixed order.");
@@ -64,6 +65,25 @@ internal static class GradientEmitter
         w.Line("global::FvGen.Geometry.Vec3 " + v + " = faceCentroids[f] - cellCentroids[" + cell + "];");
         w.Line("ref readonly " + GradientType(model) + " " + g + " = ref gradients[" + cell + "];");
         w.Line(model.State.FullyQualifiedName + " " + name + " = state[" + cell + "] + (" + v + ".X * " + g + ".X + " + v + ".Y * " + g + ".Y + " + v + ".Z * " + g + ".Z);");
+    }
+
+    /// <summary>
+    /// Writes <c>{name}</c> = the state the user reconstruction gives the face from <paramref name="cell"/>, its
+    /// (limited) gradient and the offset from its centroid to the face centroid; or, for linear reconstruction,
+    /// the built-in extrapolation.
+    /// </summary>
+    public static void FaceState(IndentedWriter w, ResidualKernelModel model, string name, string cell)
+    {
+        if (model.UserReconstruction is not { } user)
+        {
+            Reconstruct(w, model, name, cell);
+            return;
+        }
+
+        string v = "toFace" + char.ToUpperInvariant(name[0]) + name.Substring(1);
+        w.Line("global::FvGen.Geometry.Vec3 " + v + " = faceCentroids[f] - cellCentroids[" + cell + "];");
+        w.Line(model.TypeName + "." + user.Name + "(" + user.StateModifier + "state[" + cell + "], " + user.GradientModifier + "gradients[" + cell + "], "
+            + user.FaceModifier + v + ", out " + model.State.FullyQualifiedName + " " + name + ");");
     }
 
     private static void Spans(IndentedWriter w)

@@ -221,10 +221,10 @@ internal static class UnstructuredEmitter
     {
         w.Line("var face = new global::FvGen.Geometry.FaceGeometry(faceNormals[f], faceAreas[f], faceCentroids[f], faceDistances[f]);");
         string left = "state[left]", right = "state[right]";
-        if (model.Reconstruction == KernelReconstruction.Linear)
+        if (model.Reconstruction != KernelReconstruction.FirstOrder)
         {
-            GradientEmitter.Reconstruct(w, model, "leftFace", "left");
-            GradientEmitter.Reconstruct(w, model, "rightFace", "right");
+            GradientEmitter.FaceState(w, model, "leftFace", "left");
+            GradientEmitter.FaceState(w, model, "rightFace", "right");
             left = "leftFace";
             right = "rightFace";
         }
@@ -254,9 +254,9 @@ internal static class UnstructuredEmitter
             sw.Line("int inside = faceLeft[f];");
             sw.Line("var face = new global::FvGen.Geometry.FaceGeometry(faceNormals[f], faceAreas[f], faceCentroids[f], faceDistances[f]);");
             string inside = "state[inside]";
-            if (model.Reconstruction == KernelReconstruction.Linear)
+            if (model.Reconstruction != KernelReconstruction.FirstOrder)
             {
-                GradientEmitter.Reconstruct(sw, model, "insideFace", "inside");
+                GradientEmitter.FaceState(sw, model, "insideFace", "inside");
                 inside = "insideFace";
             }
 

@@ -37,10 +37,13 @@ public sealed class ResidualKernelAttribute : Attribute
 
     /// <summary>
     /// The name of a user reconstruction method in the kernel's type, used when <see cref="Reconstruction"/>
-    /// is <see cref="ReconstructionKind.User"/> (structured grids): <c>static void Name(in TState leftLeft,
+    /// is <see cref="ReconstructionKind.User"/>. On structured grids: <c>static void Name(in TState leftLeft,
     /// in TState left, in TState right, in TState rightRight, out TState leftFace, out TState rightFace)</c>,
     /// the four cells along the face direction; next to a boundary patch the missing outer cell is
-    /// replaced by its neighbour.
+    /// replaced by its neighbour. On unstructured meshes: <c>static void Name(in TState cell,
+    /// in Gradient&lt;TState&gt; gradient, in Vec3 toFace, out TState faceState)</c>, for each side of every
+    /// face, with the cell's Barth–Jespersen-limited Green–Gauss gradient and the vector from the cell
+    /// centroid to the face centroid.
     /// </summary>
     public string? UserReconstruction { get; set; }
 }

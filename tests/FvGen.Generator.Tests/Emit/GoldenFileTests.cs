@@ -40,6 +40,22 @@ public sealed class GoldenFileTests
             ("Demo.Spreading.Boundary.g.cs", "Spreading.Boundary.g.cs.txt"),
             ("Demo.Spreading.Residual.Residual.g.cs", "Spreading.Residual.g.cs.txt"));
 
+    [Fact]
+    public Task StructuredGatherKernel() =>
+        Verify(
+            [Samples.Scalar, Samples.Gather2D],
+            ("Demo.Heat.ConservedState.g.cs", "Heat.ConservedState.g.cs.txt"),
+            ("Demo.Mixing.Boundary.g.cs", "Mixing.Boundary.g.cs.txt"),
+            ("Demo.Mixing.Residual.Residual.g.cs", "Mixing.Residual.g.cs.txt"));
+
+    [Fact]
+    public Task UnstructuredUserReconstructionKernel() =>
+        Verify(
+            [Samples.Scalar, Samples.UserUnstructured],
+            ("Demo.Heat.ConservedState.g.cs", "Heat.ConservedState.g.cs.txt"),
+            ("Demo.Plume.Boundary.g.cs", "Plume.Boundary.g.cs.txt"),
+            ("Demo.Plume.Residual.Residual.g.cs", "Plume.Residual.g.cs.txt"));
+
     private static async Task Verify(string[] sources, params (string HintName, string Golden)[] expected)
     {
         string folder = GoldenFolder();

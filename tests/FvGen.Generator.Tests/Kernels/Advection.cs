@@ -48,6 +48,22 @@ public static partial class Advection
     [ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelColouredScatter)]
     public static partial void Slabs3D(StructuredGrid3D grid, ReadOnlyMemory<Scalar> u, Memory<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
 
+    [ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)]
+    public static partial void Gather1D(
+        StructuredGrid1D grid, ReadOnlyMemory<Scalar> u, Memory<Scalar> dudt, [FaceData] Memory<Scalar> faceFlux, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
+    [ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)]
+    public static partial void Gather2D(
+        StructuredGrid2D grid, ReadOnlyMemory<Scalar> u, Memory<Scalar> dudt, [FaceData] Memory<Scalar> faceFlux, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
+    [ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)]
+    public static partial void Gather3D(
+        StructuredGrid3D grid, ReadOnlyMemory<Scalar> u, Memory<Scalar> dudt, [FaceData] Memory<Scalar> faceFlux, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
+    [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.VanLeer, Mode = ExecutionMode.ParallelGather)]
+    public static partial void MusclGather3D(
+        StructuredGrid3D grid, ReadOnlyMemory<Scalar> u, Memory<Scalar> dudt, [FaceData] Memory<Scalar> faceFlux, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+
     [ResidualKernel(nameof(Upwind))]
     public static partial void ResidualUnstructured(UnstructuredMesh mesh, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 

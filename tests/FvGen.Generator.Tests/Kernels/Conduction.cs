@@ -47,6 +47,17 @@ public static partial class Conduction
     public static partial void Grid3D(StructuredGrid3D grid, ReadOnlySpan<Scalar> temperature, Span<Scalar> rate, Span<Gradient<Scalar>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
     [ResidualKernel(nameof(Fourier), Mode = ExecutionMode.ParallelGather)]
+    public static partial void GridGather3D(
+        StructuredGrid3D grid,
+        ReadOnlyMemory<Scalar> temperature,
+        Memory<Scalar> rate,
+        Memory<Gradient<Scalar>> gradients,
+        [FaceData] Memory<Scalar> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options);
+
+    [ResidualKernel(nameof(Fourier), Mode = ExecutionMode.ParallelGather)]
     public static partial void Gather(
         UnstructuredMesh mesh,
         ReadOnlyMemory<Scalar> temperature,

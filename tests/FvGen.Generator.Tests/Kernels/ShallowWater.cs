@@ -79,6 +79,16 @@ public static partial class ShallowWater
     public static partial void MusclSlabs2D(
         StructuredGrid2D grid, ReadOnlyMemory<WaterState> state, Memory<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
 
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral, Mode = ExecutionMode.ParallelGather)]
+    public static partial void MusclGather2D(
+        StructuredGrid2D grid,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options);
+
     [ResidualKernel(nameof(Rusanov))]
     public static partial void Serial(UnstructuredMesh mesh, ReadOnlySpan<WaterState> state, Span<WaterState> residual, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
 
@@ -107,6 +117,32 @@ public static partial class ShallowWater
         BoundaryFluxTally? tally,
         ParallelOptions options);
 
+    /// <summary>A user reconstruction equal to the built-in one: the cell value extrapolated to the face with its gradient.</summary>
+    public static void ExtrapolateWithGradient(in WaterState cell, in Gradient<WaterState> gradient, in Vec3 toFace, out WaterState faceState) =>
+        faceState = cell + (toFace.X * gradient.X + toFace.Y * gradient.Y + toFace.Z * gradient.Z);
+
+    /// <summary>A first-order user reconstruction: every face sees the cell average (arguments by value, to cover that form).</summary>
+    public static void CellAverage(WaterState cell, Gradient<WaterState> gradient, Vec3 toFace, out WaterState faceState) => faceState = cell;
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(ExtrapolateWithGradient))]
+    public static partial void UserLinearSerial(
+        UnstructuredMesh mesh, ReadOnlySpan<WaterState> state, Span<WaterState> residual, Span<Gradient<WaterState>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(CellAverage))]
+    public static partial void UserFirstOrderSerial(
+        UnstructuredMesh mesh, ReadOnlySpan<WaterState> state, Span<WaterState> residual, Span<Gradient<WaterState>> gradients, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(ExtrapolateWithGradient), Mode = ExecutionMode.ParallelGather)]
+    public static partial void UserLinearGather(
+        UnstructuredMesh mesh,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        Memory<Gradient<WaterState>> gradients,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options);
+
     [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Mode = ExecutionMode.ParallelColouredScatter)]
     public static partial void LinearColoured(
         UnstructuredMesh mesh,
@@ -121,6 +157,18 @@ public static partial class ShallowWater
     [ResidualKernel(nameof(Rusanov))]
     public static partial void AnyMode(
         UnstructuredMesh mesh,
+        ReadOnlyMemory<WaterState> state,
+        Memory<WaterState> residual,
+        [FaceData] Memory<WaterState> faceFlux,
+        BoundaryBinding<Boundary> boundaries,
+        BoundaryFluxTally? tally,
+        ParallelOptions options,
+        ExecutionMode mode);
+
+    /// <summary>MUSCL on a 2-D grid, the mode chosen by the caller at run time (all three are available).</summary>
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.MonotonizedCentral)]
+    public static partial void MusclAnyMode2D(
+        StructuredGrid2D grid,
         ReadOnlyMemory<WaterState> state,
         Memory<WaterState> residual,
         [FaceData] Memory<WaterState> faceFlux,

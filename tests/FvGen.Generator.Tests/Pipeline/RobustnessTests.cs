@@ -7,7 +7,7 @@ namespace FvGen.Generator.Tests.Pipeline;
 /// <summary>The generator and the usage analyzer never throw, whatever half-typed code they meet.</summary>
 public sealed class RobustnessTests
 {
-    public static TheoryData<string> SampleNames => new() { nameof(Samples.State), nameof(Samples.Conduction1D), nameof(Samples.ConductionUnstructured), nameof(Samples.Muscl1D), nameof(Samples.Other) };
+    public static TheoryData<string> SampleNames => new() { nameof(Samples.State), nameof(Samples.Conduction1D), nameof(Samples.ConductionUnstructured), nameof(Samples.Muscl1D), nameof(Samples.Gather2D), nameof(Samples.UserUnstructured), nameof(Samples.Other) };
 
     [Theory]
     [MemberData(nameof(SampleNames))]

@@ -41,6 +41,33 @@ public sealed class RunTimeModeTests
     }
 
     [Fact]
+    public void EachRunTimeModeOnAStructuredGridEqualsItsFixedModeKernelBitwise()
+    {
+        var random = new Random(5);
+        var grid = new StructuredGrid2D(
+            GridAxis.Uniform(21, 0, 2), GridAxis.Uniform(15, 0, 1), SideBoundary.Patch("west"), SideBoundary.Patch("east"), SideBoundary.Periodic, SideBoundary.Periodic);
+        var binding = new BoundaryBinding<ShallowWater.Boundary>().Bind("west", ShallowWater.Boundary.Wall).Bind("east", ShallowWater.Boundary.Outflow);
+        var state = StructuredResidualTests.RandomWater(random, grid.CellCount);
+        var options = new ParallelOptions { MaxDegreeOfParallelism = 2 };
+        var buffer = new WaterState[grid.FaceCount];
+
+        var expected = new Dictionary<ExecutionMode, WaterState[]>();
+        expected[ExecutionMode.SerialScatter] = new WaterState[grid.CellCount];
+        ShallowWater.Muscl2D(grid, state, expected[ExecutionMode.SerialScatter], binding, null);
+        expected[ExecutionMode.ParallelGather] = new WaterState[grid.CellCount];
+        ShallowWater.MusclGather2D(grid, state, expected[ExecutionMode.ParallelGather], buffer, binding, null, options);
+        expected[ExecutionMode.ParallelColouredScatter] = new WaterState[grid.CellCount];
+        ShallowWater.MusclSlabs2D(grid, state, expected[ExecutionMode.ParallelColouredScatter], binding, null, options);
+
+        foreach (var (mode, reference) in expected)
+        {
+            var residual = new WaterState[grid.CellCount];
+            ShallowWater.MusclAnyMode2D(grid, state, residual, buffer, binding, null, options, mode);
+            Assert.True(MemoryMarshal.AsBytes(reference.AsSpan()).SequenceEqual(MemoryMarshal.AsBytes(residual.AsSpan())), $"{mode} differs from its fixed-mode kernel");
+        }
+    }
+
+    [Fact]
     public void AModeTheParametersCannotSupportIsAClearError()
     {
         var grid = new StructuredGrid1D(GridAxis.Uniform(4, 0, 1), SideBoundary.Periodic, SideBoundary.Periodic);

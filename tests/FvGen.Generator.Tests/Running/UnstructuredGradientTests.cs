@@ -16,7 +16,7 @@ public sealed class UnstructuredGradientTests
 
     public static TheoryData<string> MeshKinds => UnstructuredResidualTests.MeshKinds;
 
-    private static UnstructuredMesh Mesh(string kind, int seed) => kind switch
+    internal static UnstructuredMesh Mesh(string kind, int seed) => kind switch
     {
         "triangles" => TestMeshes.Square(TestMeshes.Kind2D.Triangles, 9, seed),
         "quadrilaterals" => TestMeshes.Square(TestMeshes.Kind2D.Quadrilaterals, 10, seed),
@@ -194,7 +194,7 @@ public sealed class UnstructuredGradientTests
         }
     }
 
-    private static BoundaryBinding<ShallowWater.Boundary> Bind(UnstructuredMesh mesh, Random random)
+    internal static BoundaryBinding<ShallowWater.Boundary> Bind(UnstructuredMesh mesh, Random random)
     {
         var binding = new BoundaryBinding<ShallowWater.Boundary>();
         foreach (string name in mesh.PatchNames)

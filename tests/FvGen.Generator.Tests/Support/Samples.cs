@@ -103,6 +103,58 @@ internal static class Samples
         }
         """;
 
+    public const string Gather2D = """
+        using System;
+        using System.Threading.Tasks;
+        using FvGen;
+        using FvGen.Boundaries;
+        using FvGen.Geometry;
+        using FvGen.Ledger;
+        using FvGen.Meshes.Structured;
+
+        namespace Demo;
+
+        public static partial class Mixing
+        {
+            [NumericalFlux(Antisymmetric = true)]
+            public static Heat TwoPoint(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = -(right.Energy - left.Energy) / face.CentreDistance };
+
+            [BoundaryFlux(BoundaryKind.Wall)]
+            public static Heat Insulated(in Heat inside, in FaceGeometry face) => default;
+
+            [ResidualKernel(nameof(TwoPoint), Mode = ExecutionMode.ParallelGather)]
+            public static partial void Residual(
+                StructuredGrid2D grid, ReadOnlyMemory<Heat> state, Memory<Heat> rate, [FaceData] Memory<Heat> faceFlux, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally, ParallelOptions options);
+        }
+        """;
+
+    public const string UserUnstructured = """
+        using System;
+        using FvGen;
+        using FvGen.Boundaries;
+        using FvGen.Geometry;
+        using FvGen.Meshes.Unstructured;
+
+        namespace Demo;
+
+        public static partial class Plume
+        {
+            [NumericalFlux]
+            public static Heat Upwind(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = face.Normal.X >= 0 ? face.Normal.X * left.Energy : face.Normal.X * right.Energy };
+
+            [BoundaryFlux(BoundaryKind.Outflow)]
+            public static Heat Open(in Heat inside, in FaceGeometry face) => new() { Energy = face.Normal.X * inside.Energy };
+
+            public static void HalfSlope(in Heat cell, in Gradient<Heat> gradient, in Vec3 toFace, out Heat faceState) =>
+                faceState = cell + 0.5 * (toFace.X * gradient.X + toFace.Y * gradient.Y + toFace.Z * gradient.Z);
+
+            [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(HalfSlope))]
+            public static partial void Residual(UnstructuredMesh mesh, ReadOnlySpan<Heat> state, Span<Heat> rate, Span<Gradient<Heat>> gradients, BoundaryBinding<Boundary> boundaries);
+        }
+        """;
+
     /// <summary>A second, independent kernel in a file of its own (for caching tests).</summary>
     public const string Other = """
         using System;

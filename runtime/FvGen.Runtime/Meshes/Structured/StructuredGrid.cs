@@ -99,6 +99,26 @@ public abstract class StructuredGrid : IMesh
     /// <inheritdoc />
     public IReadOnlyList<string> PatchNames => _patchNames;
 
+    /// <summary>
+    /// The number of faces of all directions: along each direction n + 1 node planes of faces, or n when
+    /// it is periodic (the first and last node planes are then one face). A <c>ParallelGather</c>
+    /// kernel's face buffer holds at least this many states.
+    /// </summary>
+    public int FaceCount
+    {
+        get
+        {
+            long faces = 0;
+            for (int d = 0; d < _axes.Length; d++)
+            {
+                long planes = _axes[d].CellCount + (IsPeriodic(d) ? 0 : 1);
+                faces += planes * (CellCount / _axes[d].CellCount);
+            }
+
+            return checked((int)faces);
+        }
+    }
+
     /// <summary>The axis of direction <paramref name="direction"/> (0 = x, 1 = y, 2 = z).</summary>
     public GridAxis Axis(int direction) => _axes[direction];
 
