@@ -54,4 +54,18 @@ public sealed class StructuredGridTests
         var ex = Assert.Throws<ArgumentException>(() => GridAxis.FromNodes([0.0, 0.5, 0.5, 1.0]));
         Assert.Contains("node 2", ex.Message);
     }
+
+    [Fact]
+    public void FaceCountCountsNodePlanesPerDirectionWithPeriodicPlanesOnce()
+    {
+        // Counted by hand: x periodic (4 planes of 3 x 2 faces), y walled (4 planes of 4 x 2), z walled (3 planes of 4 x 3).
+        var wall = SideBoundary.Patch("wall");
+        var grid = new StructuredGrid3D(
+            GridAxis.Uniform(4, 0, 1), GridAxis.Uniform(3, 0, 1), GridAxis.Uniform(2, 0, 1),
+            SideBoundary.Periodic, SideBoundary.Periodic, wall, wall, wall, wall);
+
+        Assert.Equal(4 * 3 * 2 + 4 * 4 * 2 + 3 * 4 * 3, grid.FaceCount);
+        Assert.Equal(11, new StructuredGrid1D(GridAxis.Uniform(10, 0, 1), wall, wall).FaceCount);
+        Assert.Equal(10, new StructuredGrid1D(GridAxis.Uniform(10, 0, 1), SideBoundary.Periodic, SideBoundary.Periodic).FaceCount);
+    }
 }
