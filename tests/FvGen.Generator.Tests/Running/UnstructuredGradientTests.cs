@@ -31,7 +31,7 @@ public sealed class UnstructuredGradientTests
     {
         var random = new Random(200 + kind.Length);
         var mesh = Mesh(kind, 3);
-        var binding = Bind(mesh, random);
+        var binding = WaterChecks.RandomBinding(mesh, random);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
         var options = new ParallelOptions { MaxDegreeOfParallelism = 2 };
 
@@ -50,8 +50,8 @@ public sealed class UnstructuredGradientTests
         ShallowWater.LinearColoured(mesh, state, coloured, new Gradient<WaterState>[mesh.CellCount], binding, colourTally, options);
         Assert.True(Balance.RelativeImbalance(mesh, WaterState.AsComponents(coloured.AsSpan()), 3, colourTally) <= Tolerance);
 
-        AssertClose(serial, gathered);
-        AssertClose(serial, coloured);
+        WaterChecks.AssertClose(serial, gathered);
+        WaterChecks.AssertClose(serial, coloured);
 
         // The reconstruction must matter: second-order and first-order residuals differ.
         var first = new WaterState[mesh.CellCount];
@@ -64,7 +64,7 @@ public sealed class UnstructuredGradientTests
     {
         var mesh = TestMeshes.Square(TestMeshes.Kind2D.Triangles, 48, 9);
         var random = new Random(9);
-        var binding = Bind(mesh, random);
+        var binding = WaterChecks.RandomBinding(mesh, random);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
         byte[]? reference = null;
         foreach (int threads in new[] { 1, 2, 8 })
@@ -88,7 +88,7 @@ public sealed class UnstructuredGradientTests
         var mesh = Mesh(kind, 5);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
         var gradients = new Gradient<WaterState>[mesh.CellCount];
-        ShallowWater.LinearSerial(mesh, state, new WaterState[mesh.CellCount], gradients, Bind(mesh, random), null);
+        ShallowWater.LinearSerial(mesh, state, new WaterState[mesh.CellCount], gradients, WaterChecks.RandomBinding(mesh, random), null);
         bool anyLimitedAwayFromZero = false;
         for (int c = 0; c < mesh.CellCount; c++)
         {
@@ -194,30 +194,4 @@ public sealed class UnstructuredGradientTests
         }
     }
 
-    internal static BoundaryBinding<ShallowWater.Boundary> Bind(UnstructuredMesh mesh, Random random)
-    {
-        var binding = new BoundaryBinding<ShallowWater.Boundary>();
-        foreach (string name in mesh.PatchNames)
-        {
-            binding.Bind(name, random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
-        }
-
-        return binding;
-    }
-
-    private static void AssertClose(WaterState[] expected, WaterState[] actual)
-    {
-        var e = WaterState.AsComponents(expected.AsSpan());
-        var a = WaterState.AsComponents(actual.AsSpan());
-        double scale = 0;
-        foreach (double v in e)
-        {
-            scale = Math.Max(scale, Math.Abs(v));
-        }
-
-        for (int n = 0; n < e.Length; n++)
-        {
-            Assert.True(Math.Abs(e[n] - a[n]) <= 1e-13 * scale, $"component {n}: serial {e[n]:R}, parallel {a[n]:R}");
-        }
-    }
 }

@@ -55,7 +55,7 @@ public sealed class UnstructuredResidualTests
     {
         var random = new Random(100 + kind.Length);
         var mesh = Mesh(kind, 7);
-        var binding = WaterBinding(mesh, random);
+        var binding = WaterChecks.RandomBinding(mesh, random);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
         var serial = new WaterState[mesh.CellCount];
         var serialTally = new BoundaryFluxTally(mesh.PatchNames.Count, WaterState.ComponentCount);
@@ -74,8 +74,8 @@ public sealed class UnstructuredResidualTests
         Assert.True(Balance.RelativeImbalance(mesh, WaterState.AsComponents(coloured.AsSpan()), 3, colourTally) <= Tolerance);
 
         // Serial and parallel modes sum the same face fluxes in different orders: equal to rounding.
-        AssertClose(serial, gathered);
-        AssertClose(serial, coloured);
+        WaterChecks.AssertClose(serial, gathered);
+        WaterChecks.AssertClose(serial, coloured);
         Assert.Equal(serialTally.Totals.ToArray(), gatherTally.Totals.ToArray());
         Assert.Equal(serialTally.Totals.ToArray(), colourTally.Totals.ToArray());
     }
@@ -91,7 +91,7 @@ public sealed class UnstructuredResidualTests
             : TestMeshes.Cube(TestMeshes.Kind3D.Tetrahedra, 11, 3);
         Assert.True(mesh.InteriorFaceCount > 3 * 2048 && mesh.CellCount > 2 * 2048, "the mesh must span several parallel chunks");
         var random = new Random(5);
-        var binding = WaterBinding(mesh, random);
+        var binding = WaterChecks.RandomBinding(mesh, random);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
         byte[]? reference = null;
         byte[]? referenceColoured = null;
@@ -146,36 +146,10 @@ public sealed class UnstructuredResidualTests
     public void GatherRejectsAFaceBufferSmallerThanTheMesh()
     {
         var mesh = TestMeshes.Square(TestMeshes.Kind2D.Quadrilaterals, 3, 1);
-        var binding = WaterBinding(mesh, new Random(1));
+        var binding = WaterChecks.RandomBinding(mesh, new Random(1));
         var error = Assert.Throws<ArgumentException>(() =>
             ShallowWater.Gather(mesh, new WaterState[mesh.CellCount], new WaterState[mesh.CellCount], new WaterState[mesh.FaceCount - 1], binding, null, new ParallelOptions()));
         Assert.Contains("face buffer", error.Message);
     }
 
-    private static BoundaryBinding<ShallowWater.Boundary> WaterBinding(UnstructuredMesh mesh, Random random)
-    {
-        var binding = new BoundaryBinding<ShallowWater.Boundary>();
-        foreach (string name in mesh.PatchNames)
-        {
-            binding.Bind(name, random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
-        }
-
-        return binding;
-    }
-
-    private static void AssertClose(WaterState[] expected, WaterState[] actual)
-    {
-        var e = WaterState.AsComponents(expected.AsSpan());
-        var a = WaterState.AsComponents(actual.AsSpan());
-        double scale = 0;
-        foreach (double v in e)
-        {
-            scale = Math.Max(scale, Math.Abs(v));
-        }
-
-        for (int n = 0; n < e.Length; n++)
-        {
-            Assert.True(Math.Abs(e[n] - a[n]) <= 1e-13 * scale, $"component {n}: serial {e[n]:R}, parallel {a[n]:R}");
-        }
-    }
 }

@@ -28,7 +28,7 @@ public sealed class UnstructuredUserReconstructionTests
     {
         var random = new Random(300 + kind.Length);
         var mesh = UnstructuredGradientTests.Mesh(kind, 5);
-        var binding = UnstructuredGradientTests.Bind(mesh, random);
+        var binding = WaterChecks.RandomBinding(mesh, random);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
 
         var builtIn = new WaterState[mesh.CellCount];
@@ -64,7 +64,7 @@ public sealed class UnstructuredUserReconstructionTests
     {
         var random = new Random(310 + kind.Length);
         var mesh = UnstructuredGradientTests.Mesh(kind, 6);
-        var binding = UnstructuredGradientTests.Bind(mesh, random);
+        var binding = WaterChecks.RandomBinding(mesh, random);
         var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
 
         var firstOrder = new WaterState[mesh.CellCount];
