@@ -221,6 +221,12 @@ internal static class MethodReader
                 written.Add(root);
                 targets.Add(target);
                 onlyAssigned &= op is ISimpleAssignmentOperation;
+
+                // `flux[f].Density = …` writes the element `flux[f]`; it does not read it.
+                for (var t = target; t is IFieldReferenceOperation { Instance: { } instance }; t = instance)
+                {
+                    targets.Add(instance);
+                }
             }
         }
 
