@@ -1,0 +1,155 @@
+using System;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+using System.Text;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// An index affine in the loop variables, with coefficients that may be loop-invariant symbols:
+/// <c>i + 1</c>, <c>2*i + 1</c>, <c>j*(nx + 1) + i</c>.
+/// </summary>
+internal sealed class AffineIndex : IEquatable<AffineIndex>
+{
+    public AffineIndex(SymPoly constant, IEnumerable<KeyValuePair<string, SymPoly>> linear)
+    {
+        Constant = constant;
+        Linear = linear.Where(l => !l.Value.IsZero).OrderBy(l => l.Key, StringComparer.Ordinal).ToImmutableArray();
+        LinearKey = string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
+        Key = LinearKey + "|" + Constant;
+    }
+
+    /// <summary>The part that does not depend on a loop variable.</summary>
+    public SymPoly Constant { get; }
+
+    /// <summary>Coefficient of each loop variable, ordinal by variable name, none zero.</summary>
+    public ImmutableArray<KeyValuePair<string, SymPoly>> Linear { get; }
+
+    /// <summary>Identifies the linear part only (the "shape" of the index).</summary>
+    public string LinearKey { get; }
+
+    public string Key { get; }
+
+    public bool IsConstant => Linear.IsEmpty;
+
+    public static AffineIndex FromConstant(SymPoly constant) => new(constant, Array.Empty<KeyValuePair<string, SymPoly>>());
+
+    public static AffineIndex Variable(string name) =>
+        new(SymPoly.Zero, new[] { new KeyValuePair<string, SymPoly>(name, SymPoly.One) });
+
+    public SymPoly CoefficientOf(string variable)
+    {
+        foreach (var l in Linear)
+        {
+            if (l.Key == variable)
+            {
+                return l.Value;
+            }
+        }
+
+        return SymPoly.Zero;
+    }
+
+    public static AffineIndex operator +(AffineIndex a, AffineIndex b) =>
+        new(a.Constant + b.Constant, Merge(a.Linear.Concat(b.Linear)));
+
+    public static AffineIndex operator -(AffineIndex a) =>
+        new(-a.Constant, a.Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, -l.Value)));
+
+    public static AffineIndex operator -(AffineIndex a, AffineIndex b) => a + (-b);
+
+    /// <summary>Product with a loop-invariant factor.</summary>
+    public AffineIndex Scale(SymPoly factor) =>
+        new(Constant * factor, Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, l.Value * factor)));
+
+    /// <summary>The index after the loop variables move by <paramref name="shift"/> (iteration <c>i → i + n</c>).</summary>
+    public AffineIndex Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var constant = Constant;
+        foreach (var l in Linear)
+        {
+            if (shift.TryGetValue(l.Key, out long n) && n != 0)
+            {
+                constant += l.Value * Rational.FromInteger(n);
+            }
+        }
+
+        return new AffineIndex(constant, Linear);
+    }
+
+    private static IEnumerable<KeyValuePair<string, SymPoly>> Merge(IEnumerable<KeyValuePair<string, SymPoly>> parts)
+    {
+        var sum = new Dictionary<string, SymPoly>(StringComparer.Ordinal);
+        foreach (var p in parts)
+        {
+            sum[p.Key] = sum.TryGetValue(p.Key, out var current) ? current + p.Value : p.Value;
+        }
+
+        return sum;
+    }
+
+    public bool Equals(AffineIndex? other) => other is not null && Key == other.Key;
+
+    public override bool Equals(object? obj) => obj is AffineIndex a && Equals(a);
+
+    public override int GetHashCode() => StringComparer.Ordinal.GetHashCode(Key);
+
+    /// <summary>C# text, variables first: <c>j * (nx + 1) + i + 1</c>.</summary>
+    public override string ToString()
+    {
+        var parts = new List<(int Sign, string Text)>();
+        foreach (var l in Linear.Reverse())
+        {
+            parts.Add(Scaled(l.Value, l.Key));
+        }
+
+        foreach (var t in Constant.Terms)
+        {
+            var single = SymPoly.Of(new[] { new KeyValuePair<Monomial, Rational>(t.Key, t.Value.Abs()) });
+            parts.Add((t.Value.Sign, CSharpText.Of(single)));
+        }
+
+        if (parts.Count == 0)
+        {
+            return "0";
+        }
+
+        var sb = new StringBuilder();
+        for (int k = 0; k < parts.Count; k++)
+        {
+            if (k == 0)
+            {
+                sb.Append(parts[k].Sign < 0 ? "-" : string.Empty).Append(parts[k].Text);
+            }
+            else
+            {
+                sb.Append(parts[k].Sign < 0 ? " - " : " + ").Append(parts[k].Text);
+            }
+        }
+
+        return sb.ToString();
+    }
+
+    private static (int Sign, string Text) Scaled(SymPoly coefficient, string variable)
+    {
+        if (coefficient.IsOne)
+        {
+            return (1, variable);
+        }
+
+        if (coefficient.IsConstant)
+        {
+            var c = coefficient.ConstantValue;
+            if (c == Rational.MinusOne)
+            {
+                return (-1, variable);
+            }
+
+            return (c.Sign, c.Abs().ToCSharp() + " * " + variable);
+        }
+
+        string text = CSharpText.Of(coefficient);
+        return (1, variable + " * " + (coefficient.IsMonomial && coefficient.Terms[0].Key.Powers.Length == 1 && coefficient.Terms[0].Value.IsOne ? text : "(" + text + ")"));
+    }
+}

@@ -1,0 +1,609 @@
+using System;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// The conservation criterion: for every class of shift-equivalent bodies the coefficients sum to
+/// zero — except sources (terms that read only the target cell) and, in update form, the old total
+/// carried with weight exactly 1. Cell loops, face loops and one-map loops are told apart by the
+/// subscripts they write. Speaks about conservation only, never about consistency.
+/// </summary>
+internal static class BalanceChecker
+{
+    public static ImmutableArray<Finding> Check(LoopUpdate update)
+    {
+        var findings = new List<Finding>();
+        findings.AddRange(InPlaceSweeps(update));
+        foreach (var group in update.Writes.GroupBy(w => w.Array + "|" + w.Path))
+        {
+            var writes = group.ToList();
+            if (writes.Select(w => w.SubscriptKey).Distinct().Count() > 1)
+            {
+                findings.AddRange(CheckFaceLoop(update.Space, writes));
+            }
+            else
+            {
+                findings.AddRange(CheckCellLoop(update.Space, writes));
+            }
+        }
+
+        return findings.ToImmutableArray();
+    }
+
+    private static IEnumerable<Finding> CheckCellLoop(LoopSpace space, List<UpdateWrite> writes)
+    {
+        var live = new List<UpdateWrite>();
+        foreach (var w in writes)
+        {
+            if (w.IsAssignment && !w.Value.Reads.Any(r => IsTargetElement(r, w)))
+            {
+                live.Clear();
+            }
+
+            live.Add(w);
+        }
+
+        bool assignment = live.Any(w => w.IsAssignment);
+        var measured = live.Select(w => (Write: w, Value: MeasureWeighted(w))).ToList();
+        var terms = measured.SelectMany(m => m.Value.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, m.Write))).ToList();
+        var measures = new HashSet<string>(measured.Where(m => m.Value.Measure is not null).Select(m => m.Value.Measure!.Key), StringComparer.Ordinal);
+        var classes = ShiftClass.Build(terms, space);
+        bool mapped = writes[0].Subscripts.SelectMany(g => g).Any(s => s is MappedSubscript);
+
+        bool oldTotalClaimed = false;
+        var unbalanced = new List<ShiftClass>();
+        var sources = new List<ShiftClass>();
+        foreach (var c in classes)
+        {
+            var sum = c.Sum;
+            if (c.Members.All(IsSource))
+            {
+                if (!sum.IsZero)
+                {
+                    sources.Add(c);
+                }
+
+                continue;
+            }
+
+            if (GivenAndTakenBack(c))
+            {
+                yield return SelfCancelling(c, writes[0]);
+                continue;
+            }
+
+            // A class mixing flux members with members at the target cell: the part of the cell's
+            // weight in symbols no flux member carries is a source (−decay·u[i], the old u[i]).
+            var sourcePart = SourcePart(c);
+            sum -= sourcePart;
+            if (assignment && !oldTotalClaimed && sourcePart.IsOne && IsOldStateClass(c, measures))
+            {
+                oldTotalClaimed = true;
+            }
+
+            if (sum.IsZero)
+            {
+                continue;
+            }
+
+            if (assignment && !oldTotalClaimed && sum.IsOne && IsOldStateClass(c, measures) && Positions(c) > 1)
+            {
+                oldTotalClaimed = true;
+                continue;
+            }
+
+            unbalanced.Add(c);
+        }
+
+        if (mapped)
+        {
+            foreach (var c in unbalanced)
+            {
+                yield return OneSidedMapped(c, writes[0]);
+            }
+
+            yield break;
+        }
+
+        // Writing a neighbour of the loop's cell (r[i - 1]) is the half of a face loop that was kept.
+        if (writes[0].Subscripts.SelectMany(g => g).OfType<AffineSubscript>().Any(a => !a.Index.IsConstant && !a.Index.Constant.IsZero))
+        {
+            foreach (var c in unbalanced)
+            {
+                var finding = OneSided(c, "it goes to " + writes[0].RenderTarget() + " with weight " + c.Sum + " and to no other cell; the other cell of the face must receive the opposite weight");
+                var other = OtherCell(c.Representative);
+                if (other is not null && c.Members.Count == 1)
+                {
+                    finding = finding with
+                    {
+                        Properties = finding.Properties.Add(FindingProperties.OppositeTarget, other),
+                        WriteOrigin = c.Representative.Write.Origin,
+                    };
+                }
+
+                yield return finding;
+            }
+
+            yield break;
+        }
+
+        var singles = new List<ShiftClass>();
+        foreach (var c in unbalanced)
+        {
+            if (Positions(c) == 1)
+            {
+                singles.Add(c);
+            }
+            else if (assignment && IsOldStateClass(c, measures) && IsStateArray(c, terms))
+            {
+                yield return OldTotal(c);
+            }
+            else
+            {
+                yield return Unbalanced(c);
+            }
+        }
+
+        // A lone term whose weight cancels a similar lone term sitting at another face is one face
+        // evaluated two ways. (Two parts of one face flux, such as k[i+1]·u[i+1] and k[i+1]·u[i], sit at
+        // the same face: that whole flux is dropped, and each part is reported as such.)
+        var paired = new HashSet<ShiftClass>();
+        foreach (var a in singles)
+        {
+            if (paired.Contains(a))
+            {
+                continue;
+            }
+
+            var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && Similar(a, x)
+                && ((a.Sum + x.Sum).IsZero || (SameFunction(a, x) && (a.Sum - x.Sum).IsZero))
+                && LeadingOffset(a.Representative) != LeadingOffset(x.Representative));
+            if (b is not null)
+            {
+                paired.Add(a);
+                paired.Add(b);
+                yield return Mismatched(a, b, classes, space);
+            }
+        }
+
+        foreach (var a in singles.Where(s => !paired.Contains(s)))
+        {
+            yield return Dropped(a, classes, space);
+        }
+    }
+
+    /// <summary>The one other cell a face term reads besides the target (<c>r[i]</c> for a term written to <c>r[i - 1]</c>).</summary>
+    private static string? OtherCell(AttributedTerm term)
+    {
+        var write = term.Write;
+        var cells = term.Term.Reads
+            .Where(r => r.Role == DataRole.Cell && !r.IsLoopIndex && r.Subscripts.Length == write.Subscripts.Length
+                && r.Subscripts.Zip(write.Subscripts, (a, b) => a.Length == b.Length && a.Zip(b, (x, y) => x.ShapeKey == y.ShapeKey).All(s => s)).All(s => s))
+            .Select(r => r.Subscripts)
+            .GroupBy(s => string.Join("][", s.Select(g => string.Join(",", g.Select(x => x.Key)))))
+            .Where(g => g.Key != write.SubscriptKey)
+            .ToList();
+        return cells.Count == 1
+            ? write.Array + string.Concat(cells[0].First().Select(g => "[" + string.Join(", ", g.Select(x => x.ToString())) + "]")) + write.Path
+            : null;
+    }
+
+    /// <summary>Members at one position with opposite signs from different writes: given to a cell and taken back from it.</summary>
+    private static bool GivenAndTakenBack(ShiftClass c) =>
+        c.Members.GroupBy(m => ShiftKey(m.Shift)).Any(g =>
+            g.Select(m => m.Source.Write).Distinct().Count() > 1
+            && g.Any(m => m.Weight.LeadingSign > 0) && g.Any(m => m.Weight.LeadingSign < 0)
+            && g.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight).IsZero);
+
+    /// <summary>The terms of the target-cell members' weights in monomials that no other member has.</summary>
+    private static SymPoly SourcePart(ShiftClass c)
+    {
+        var local = c.Members.Where(IsSource).ToList();
+        if (local.Count == 0 || local.Count == c.Members.Count)
+        {
+            return SymPoly.Zero;
+        }
+
+        var fluxMonomials = new HashSet<Monomial>(c.Members.Where(m => !IsSource(m)).SelectMany(m => m.Weight.Terms.Select(t => t.Key)));
+        var localWeight = local.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
+        return SymPoly.Of(localWeight.Terms.Where(t => !fluxMonomials.Contains(t.Key)));
+    }
+
+    private static int Positions(ShiftClass c) => c.Members.Select(m => ShiftKey(m.Shift)).Distinct().Count();
+
+    /// <summary>The array of a single-read class is the state when the write also reads it inside a call or a product.</summary>
+    private static bool IsStateArray(ShiftClass c, List<AttributedTerm> terms)
+    {
+        if (c.Representative.Term.Factors.FirstOrDefault() is not ReadExpr read)
+        {
+            return false;
+        }
+
+        return terms.Any(t => t.Term.Factors.Length > 1 || t.Term.Factors.Any(f => f is not ReadExpr)
+            ? t.Term.Reads.Any(r => r.Array == read.Array)
+            : false);
+    }
+
+    private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes)
+    {
+        var terms = writes.SelectMany(w => MeasureWeighted(w).Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, w))).ToList();
+        foreach (var c in ShiftClass.Build(terms, space))
+        {
+            var sum = c.Sum;
+            var cells = c.Members.Select(m => (Member: m, Cell: CellKey(m))).ToList();
+            if (!sum.IsZero)
+            {
+                var byCell = cells.GroupBy(x => x.Cell).Select(g => g.First().Member.Source.Write.RenderTarget() + " with weight " + g.Aggregate(SymPoly.Zero, (s, x) => s + x.Member.Weight)).ToList();
+                string detail = byCell.Count == 1
+                    ? "it goes to " + byCell[0] + " and to no other cell; the other cell of the face must receive the opposite weight"
+                    : "it goes to " + string.Join(" and to ", byCell) + ", which sum to " + sum + ", not 0";
+                yield return OneSided(c, detail);
+            }
+            else if (cells.Select(x => x.Cell).Distinct().Count() == 1)
+            {
+                yield return SelfCancelling(c, c.Representative.Write);
+            }
+        }
+    }
+
+    private static IEnumerable<Finding> InPlaceSweeps(LoopUpdate update)
+    {
+        var reported = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var w in update.Writes)
+        {
+            foreach (var other in update.Writes)
+            {
+                foreach (var t in other.Value.Terms)
+                {
+                    var read = t.Reads.FirstOrDefault(r => r.Array == w.Array && SubscriptKey(r) != w.SubscriptKey);
+                    if (read is not null && reported.Add(w.Array))
+                    {
+                        var props = ImmutableDictionary<string, string?>.Empty.Add(FindingProperties.SweptArray, w.Array);
+                        yield return new Finding(
+                            FindingKind.InPlaceSweep,
+                            ImmutableArray.Create(w.RenderTarget(), Text.Short(read.Render())),
+                            ImmutableArray.Create(w.Origin),
+                            t.Origins,
+                            props)
+                        { WriteOrigin = w.Origin };
+                    }
+                }
+            }
+        }
+    }
+
+    private static Finding Dropped(ShiftClass c, List<ShiftClass> all, LoopSpace space)
+    {
+        var rep = c.Representative;
+        var weight = c.Sum;
+        var (shift, variable) = CounterpartShift(rep, all, space);
+        var counterpart = rep.Term.Shift(shift);
+        var (sign, text) = CSharpText.SignedProduct(-weight, counterpart.RenderBody());
+        string addend = (sign < 0 ? "- " : "+ ") + text;
+        bool leaves = weight.LeadingSign < 0;
+        var (templateSign, template) = CSharpText.SignedProduct(-weight, "§");
+        var props = ImmutableDictionary<string, string?>.Empty
+            .Add(FindingProperties.CounterpartShift, string.Join(";", shift.Where(kv => kv.Value != 0).Select(kv => kv.Key + "=" + kv.Value)))
+            .Add(FindingProperties.CounterpartText, addend)
+            .Add(FindingProperties.CounterpartTemplate, (templateSign < 0 ? "- " : "+ ") + template);
+        if (rep.Term.Factors.Length == 1 && rep.Term.Origins.Length == 1)
+        {
+            props = props.Add(FindingProperties.SingleFactor, "true");
+        }
+
+        return new Finding(
+            FindingKind.DroppedFaceTerm,
+            ImmutableArray.Create(
+                Text.Short(rep.Term.RenderBody()),
+                leaves ? "leaves" : "enters",
+                rep.Write.RenderCell(),
+                weight.ToString(),
+                leaves ? "receives" : "gives",
+                variable,
+                Text.Short(addend)),
+            rep.Term.Origins,
+            ImmutableArray<int>.Empty,
+            props)
+        { WriteOrigin = rep.Write.Origin };
+    }
+
+    private static Finding Mismatched(ShiftClass a, ShiftClass b, List<ShiftClass> all, LoopSpace space)
+    {
+        // The primary is the evaluation at the low face; the expected text is the other one moved there.
+        if (LeadingOffset(b.Representative) > LeadingOffset(a.Representative))
+        {
+            (a, b) = (b, a);
+        }
+
+        var (shift, _) = CounterpartShift(a.Representative, all, space);
+        var expected = a.Representative.Term.Shift(shift).RenderBody();
+        return new Finding(
+            FindingKind.MismatchedFluxEvaluations,
+            ImmutableArray.Create(
+                Text.Short(b.Representative.Term.RenderBody()),
+                b.Sum.ToString(),
+                Text.Short(a.Representative.Term.RenderBody()),
+                a.Sum.ToString(),
+                Text.Short(expected)),
+            b.Representative.Term.Origins,
+            a.Representative.Term.Origins,
+            ImmutableDictionary<string, string?>.Empty);
+    }
+
+    private static Finding Unbalanced(ShiftClass c)
+    {
+        // Blame the member at the low face (the usual place of a sign slip); the others are counterparts.
+        var last = c.Members.OrderBy(m => LeadingOffset(m.Source)).First();
+        var others = c.Members.Where(m => m != last).ToList();
+        var othersWeight = others.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
+        var needed = last.Sign > 0 ? -othersWeight : othersWeight;
+        string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
+        return new Finding(
+            FindingKind.UnbalancedFaceTerm,
+            ImmutableArray.Create(
+                Text.Short(last.Source.Term.RenderBody()),
+                weights,
+                c.Sum.ToString(),
+                "0",
+                "for the difference to cancel, `" + Text.Short(last.Source.Term.RenderBody()) + "` needs weight " + needed),
+            last.Source.Term.Origins,
+            others.SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
+            ImmutableDictionary<string, string?>.Empty);
+    }
+
+    private static Finding OldTotal(ShiftClass c)
+    {
+        var rep = c.Representative;
+        string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
+        return new Finding(
+            FindingKind.UnbalancedFaceTerm,
+            ImmutableArray.Create(
+                Text.Short(rep.Term.RenderBody()),
+                weights,
+                c.Sum.ToString(),
+                "1",
+                "an update must carry the old total over with weight exactly 1"),
+            rep.Term.Origins,
+            c.Members.Skip(1).SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
+            ImmutableDictionary<string, string?>.Empty);
+    }
+
+    private static Finding OneSidedMapped(ShiftClass c, UpdateWrite write)
+    {
+        var writtenMaps = write.Subscripts.SelectMany(g => g).OfType<MappedSubscript>().Select(m => m.Map).ToList();
+        var otherMap = c.Members.SelectMany(m => m.Source.Term.Reads).SelectMany(r => r.AllSubscripts).OfType<MappedSubscript>()
+            .Select(m => m.Map).FirstOrDefault(m => !writtenMaps.Contains(m));
+        string detail = "it goes to " + write.RenderTarget() + " with weight " + c.Sum + " and to no other cell";
+        var props = ImmutableDictionary<string, string?>.Empty;
+        if (otherMap is not null && writtenMaps.Count == 1)
+        {
+            var opposite = write.RenderTarget().Replace(writtenMaps[0] + "[", otherMap + "[");
+            detail += "; the face also reads through `" + otherMap + "`, so `" + opposite + "` must receive the opposite weight";
+            props = props
+                .Add(FindingProperties.OppositeTarget, opposite)
+                .Add(FindingProperties.WrittenMap, writtenMaps[0])
+                .Add(FindingProperties.OtherMap, otherMap);
+        }
+
+        return OneSided(c, detail, props) with { WriteOrigin = c.Members.Count == 1 ? write.Origin : -1 };
+    }
+
+    private static Finding OneSided(ShiftClass c, string detail, ImmutableDictionary<string, string?>? props = null) =>
+        new(
+            FindingKind.OneSidedScatter,
+            ImmutableArray.Create(Text.Short(c.Representative.Term.RenderBody()), detail),
+            c.Representative.Term.Origins,
+            c.Members.Skip(1).SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
+            props ?? ImmutableDictionary<string, string?>.Empty);
+
+    private static Finding SelfCancelling(ShiftClass c, UpdateWrite write) =>
+        new(
+            FindingKind.OneSidedScatter,
+            ImmutableArray.Create(
+                Text.Short(c.Representative.Term.RenderBody()),
+                "it is taken from and given back to the same cell " + write.RenderTarget() + ", so the other cell of the face gets nothing"),
+            c.Members[c.Members.Count - 1].Source.Term.Origins,
+            c.Members.Take(c.Members.Count - 1).SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
+            ImmutableDictionary<string, string?>.Empty);
+
+    /// <summary>
+    /// The shift that turns a lone face term into the counterpart completing its difference: one
+    /// step back along the variable in which the term sits ahead of the cell, or one step forward
+    /// when it sits at the cell (a face array staggered at the low face). With no offset anywhere the
+    /// variable is one no other class of the write differences along.
+    /// </summary>
+    private static (ImmutableDictionary<string, long> Shift, string Variable) CounterpartShift(AttributedTerm term, List<ShiftClass> all, LoopSpace space)
+    {
+        var lattice = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
+        var target = term.Write.Subscripts.SelectMany(g => g).SelectMany(s => s.AffineParts).ToList();
+        var offsets = lattice.ToDictionary(v => v.Name, _ => (Max: long.MinValue, Min: long.MaxValue), StringComparer.Ordinal);
+        var used = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var read in term.Term.Reads)
+        {
+            foreach (var part in read.AllSubscripts.SelectMany(s => s.AffineParts))
+            {
+                foreach (var v in lattice.Where(v => !part.CoefficientOf(v.Name).IsZero))
+                {
+                    used.Add(v.Name);
+                }
+
+                foreach (var t in target.Where(t => t.LinearKey == part.LinearKey))
+                {
+                    var n = ShiftMatcher.Solve(new[] { (t, part) }, space);
+                    if (n is null)
+                    {
+                        continue;
+                    }
+
+                    foreach (var kv in n)
+                    {
+                        var o = offsets[kv.Key];
+                        offsets[kv.Key] = (Math.Max(o.Max, kv.Value), Math.Min(o.Min, kv.Value));
+                    }
+                }
+            }
+        }
+
+        var differencing = new HashSet<string>(
+            all.Where(c => c.Sum.IsZero).SelectMany(c => c.Members).SelectMany(m => m.Shift).Where(kv => kv.Value != 0).Select(kv => kv.Key),
+            StringComparer.Ordinal);
+        var step = lattice.ToDictionary(v => v.Name, v => v.Step, StringComparer.Ordinal);
+        foreach (var v in lattice.Where(v => offsets[v.Name].Max != long.MinValue && offsets[v.Name].Max > 0))
+        {
+            return (Unit(lattice, v.Name, -step[v.Name]), v.Name);
+        }
+
+        foreach (var v in lattice.Where(v => offsets[v.Name].Min != long.MaxValue && offsets[v.Name].Min < 0))
+        {
+            return (Unit(lattice, v.Name, step[v.Name]), v.Name);
+        }
+
+        var free = lattice.FirstOrDefault(v => used.Contains(v.Name) && !differencing.Contains(v.Name))
+            ?? lattice.FirstOrDefault(v => used.Contains(v.Name))
+            ?? lattice.FirstOrDefault();
+        return free is null
+            ? (ImmutableDictionary<string, long>.Empty, "?")
+            : (Unit(lattice, free.Name, step[free.Name]), free.Name);
+    }
+
+    /// <summary>The largest offset of any read of the term from its target cell, summed over the loop variables.</summary>
+    private static long LeadingOffset(AttributedTerm term)
+    {
+        var target = term.Write.Subscripts.SelectMany(g => g).SelectMany(s => s.AffineParts).ToList();
+        var space = new LoopSpace(term.Term.Reads.SelectMany(r => r.AllSubscripts).SelectMany(s => s.AffineParts)
+            .SelectMany(p => p.Linear.Select(l => l.Key)).Distinct().Select(n => new LoopVariable(n, 1, LoopVariableKind.Lattice)).ToImmutableArray());
+        long best = long.MinValue;
+        foreach (var part in term.Term.Reads.SelectMany(r => r.AllSubscripts).SelectMany(s => s.AffineParts))
+        {
+            foreach (var t in target.Where(t => t.LinearKey == part.LinearKey))
+            {
+                var n = ShiftMatcher.Solve(new[] { (t, part) }, space);
+                if (n is not null)
+                {
+                    best = Math.Max(best, n.Values.Sum());
+                }
+            }
+        }
+
+        return best;
+    }
+
+    private static ImmutableDictionary<string, long> Unit(List<LoopVariable> lattice, string variable, long value) =>
+        lattice.ToImmutableDictionary(v => v.Name, v => v.Name == variable ? value : 0L, StringComparer.Ordinal);
+
+    /// <summary>Two lone classes are one face seen twice when both bodies are evaluations (a call or a product), not plain reads.</summary>
+    private static bool Similar(ShiftClass a, ShiftClass b)
+    {
+        static bool Evaluation(ImmutableArray<Expr> factors) => factors.Length > 1 || factors.Any(f => f is CallExpr);
+        return Evaluation(a.Representative.Term.Factors) && Evaluation(b.Representative.Term.Factors);
+    }
+
+    /// <summary>Both bodies are one call of the same function (whose two evaluations may differ only in order or sign).</summary>
+    private static bool SameFunction(ShiftClass a, ShiftClass b) =>
+        a.Representative.Term.Factors.Length == 1 && b.Representative.Term.Factors.Length == 1
+        && a.Representative.Term.Factors[0] is CallExpr ca && b.Representative.Term.Factors[0] is CallExpr cb && ca.Function == cb.Function;
+
+    /// <summary>The old state: every member a single read of one cell array (times the cell measure, once multiplied out).</summary>
+    private static bool IsOldStateClass(ShiftClass c, HashSet<string> measures)
+    {
+        foreach (var m in c.Members)
+        {
+            var reads = m.Source.Term.Factors.Where(f => !measures.Contains(f.Key)).ToList();
+            if (reads.Count != 1 || reads[0] is not ReadExpr r || r.Role != DataRole.Cell)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>A source reads only the cell it writes: no face data, every subscript one of the target's.</summary>
+    private static bool IsSource(ClassMember member)
+    {
+        var target = member.Source.Write.Subscripts.SelectMany(g => g).ToList();
+        var targetKeys = new HashSet<string>(target.Select(s => s.Key), StringComparer.Ordinal);
+
+        // A boundary loop writes through one map and reads cells through it only; data of its own
+        // face (indexed by the map's argument) belongs to that boundary flux.
+        var boundaryFace = new HashSet<string>(target.OfType<MappedSubscript>().SelectMany(m => m.Arguments).Select(a => a.Key), StringComparer.Ordinal);
+        foreach (var read in member.Source.Term.Reads)
+        {
+            bool ownFaceData = boundaryFace.Count > 0 && read.Role != DataRole.InteriorFace && read.AllSubscripts.All(s => boundaryFace.Contains(s.Key));
+            if (ownFaceData)
+            {
+                continue;
+            }
+
+            if (read.Role != DataRole.Cell || read.AllSubscripts.Any(s => !targetKeys.Contains(s.Key)))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>
+    /// Multiplies out the cell measure: a divisor indexed exactly like the target
+    /// (<c>/ dx[i]</c>, <c>/ vol[c]</c>), since the conserved total is Σ measure · value.
+    /// </summary>
+    private static (SumExpr Sum, Expr? Measure) MeasureWeighted(UpdateWrite write)
+    {
+        ReciprocalExpr? divisor = null;
+        foreach (var t in write.Value.Terms)
+        {
+            divisor = t.Factors.OfType<ReciprocalExpr>().FirstOrDefault(r =>
+                r.Denominator.Terms.Length == 1
+                && r.Denominator.Terms[0].Coefficient.IsOne
+                && r.Denominator.Terms[0].Factors.Length == 1
+                && r.Denominator.Terms[0].Factors[0] is ReadExpr m
+                && m.Role == DataRole.Cell
+                && SubscriptKey(m) == write.SubscriptKey);
+            if (divisor is not null)
+            {
+                break;
+            }
+        }
+
+        if (divisor is null)
+        {
+            return (write.Value, null);
+        }
+
+        var measure = divisor.Denominator.Terms[0].Factors[0];
+        var weighted = write.Value.Terms.Select(t =>
+        {
+            var factors = t.Factors.ToList();
+            int k = factors.FindIndex(f => f.Key == divisor.Key);
+            if (k >= 0)
+            {
+                factors.RemoveAt(k);
+            }
+            else
+            {
+                factors.Add(measure);
+            }
+
+            return new Term(t.Coefficient, factors, t.Origins);
+        });
+        return (SumExpr.Of(weighted), measure);
+    }
+
+    private static bool IsTargetElement(ReadExpr read, UpdateWrite write) =>
+        read.Array == write.Array && read.Path == write.Path && SubscriptKey(read) == write.SubscriptKey;
+
+    private static string SubscriptKey(ReadExpr read) => string.Join("][", read.Subscripts.Select(g => string.Join(",", g.Select(s => s.Key))));
+
+    private static string CellKey(ClassMember m)
+    {
+        var back = m.Shift.ToDictionary(kv => kv.Key, kv => -kv.Value, StringComparer.Ordinal);
+        return string.Join("][", m.Source.Write.Subscripts.Select(g => string.Join(",", g.Select(s => s.Shift(back).Key))));
+    }
+
+    private static string ShiftKey(ImmutableDictionary<string, long> shift) =>
+        string.Join(";", shift.Where(kv => kv.Value != 0).OrderBy(kv => kv.Key, StringComparer.Ordinal).Select(kv => kv.Key + "=" + kv.Value));
+}

@@ -1,0 +1,77 @@
+using System.Collections.Generic;
+using System.Linq;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// Exact Gaussian elimination over the rationals for the small systems that decide whether two
+/// bodies differ by a lattice shift (one unknown per loop variable).
+/// </summary>
+internal static class LinearSolver
+{
+    /// <summary>
+    /// Solves <c>A x = b</c> (rows of <paramref name="rows"/>, last entry the right side). Free
+    /// unknowns are set to zero. Returns null when the system is inconsistent.
+    /// </summary>
+    public static Rational[]? Solve(List<Rational[]> rows, int unknowns)
+    {
+        var m = rows.Select(r => (Rational[])r.Clone()).ToList();
+        var pivotColumnOfRow = new List<int>();
+        int row = 0;
+        for (int col = 0; col < unknowns && row < m.Count; col++)
+        {
+            int pivot = -1;
+            for (int r = row; r < m.Count; r++)
+            {
+                if (!m[r][col].IsZero)
+                {
+                    pivot = r;
+                    break;
+                }
+            }
+
+            if (pivot < 0)
+            {
+                continue;
+            }
+
+            (m[row], m[pivot]) = (m[pivot], m[row]);
+            var p = m[row][col];
+            for (int c = col; c <= unknowns; c++)
+            {
+                m[row][c] /= p;
+            }
+
+            for (int r = 0; r < m.Count; r++)
+            {
+                if (r != row && !m[r][col].IsZero)
+                {
+                    var factor = m[r][col];
+                    for (int c = col; c <= unknowns; c++)
+                    {
+                        m[r][c] -= factor * m[row][c];
+                    }
+                }
+            }
+
+            pivotColumnOfRow.Add(col);
+            row++;
+        }
+
+        for (int r = row; r < m.Count; r++)
+        {
+            if (!m[r][unknowns].IsZero)
+            {
+                return null;
+            }
+        }
+
+        var x = Enumerable.Repeat(Rational.Zero, unknowns).ToArray();
+        for (int r = 0; r < pivotColumnOfRow.Count; r++)
+        {
+            x[pivotColumnOfRow[r]] = m[r][unknowns];
+        }
+
+        return x;
+    }
+}

@@ -1,0 +1,53 @@
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// A read of an array element, possibly of one component of a struct element:
+/// <c>fy[i, j + 1]</c>, <c>q[i][j]</c>, <c>u[left[f]].Energy</c>.
+/// </summary>
+internal sealed class ReadExpr : Expr
+{
+    public ReadExpr(string array, ImmutableArray<ImmutableArray<IndexTerm>> subscripts, string path, DataRole role)
+    {
+        Array = array;
+        Subscripts = subscripts;
+        Path = path;
+        Role = role;
+        Key = "R:" + array + string.Concat(subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.Key)) + "]")) + path;
+        ShapeKey = "R:" + array + string.Concat(subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.ShapeKey)) + "]")) + path;
+    }
+
+    /// <summary>Canonical name of the array (a parameter, local, field or member chain).</summary>
+    public string Array { get; }
+
+    /// <summary>One group per pair of brackets: <c>[i, j]</c> is one group of two, <c>[i][j]</c> two groups of one.</summary>
+    public ImmutableArray<ImmutableArray<IndexTerm>> Subscripts { get; }
+
+    /// <summary>Component chain after the element (<c>.Momentum.X</c>), empty for the element itself.</summary>
+    public string Path { get; }
+
+    public DataRole Role { get; }
+
+    public override string Key { get; }
+
+    public override string ShapeKey { get; }
+
+    public IEnumerable<IndexTerm> AllSubscripts => Subscripts.SelectMany(g => g);
+
+    public override IEnumerable<ReadExpr> Reads => new[] { this };
+
+    public override Expr Shift(IReadOnlyDictionary<string, long> shift) =>
+        new ReadExpr(Array, Subscripts.Select(g => g.Select(s => s.Shift(shift)).ToImmutableArray()).ToImmutableArray(), Path, Role);
+
+    /// <summary>A loop variable used as a value (<c>x0 + i * dx</c>) is a read of the empty array name.</summary>
+    public static ReadExpr LoopIndex(string variable) =>
+        new(string.Empty, ImmutableArray.Create(ImmutableArray.Create<IndexTerm>(new AffineSubscript(AffineIndex.Variable(variable)))), string.Empty, DataRole.Cell);
+
+    public bool IsLoopIndex => Array.Length == 0;
+
+    public override string Render() =>
+        IsLoopIndex ? "(" + Subscripts[0][0] + ")" : Array + string.Concat(Subscripts.Select(g => "[" + string.Join(", ", g.Select(s => s.ToString())) + "]")) + Path;
+}

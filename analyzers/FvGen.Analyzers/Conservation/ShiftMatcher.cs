@@ -1,0 +1,463 @@
+using System;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// Decides whether one body is another moved by a lattice shift: the same shape, the same linear
+/// part of every index, and offsets that differ by the loop's linear map applied to one integer
+/// vector (a multiple of each variable's step; zero for collection variables). Commutative
+/// products and symmetric calls may be matched in any order; an antisymmetric flux may be matched
+/// swapped, with a sign.
+/// </summary>
+internal static class ShiftMatcher
+{
+    /// <summary>Upper bound on alignments tried for one pair of bodies (products and symmetric calls permute).</summary>
+    private const int MaxAlignments = 4096;
+
+    /// <summary>A found shift: body B equals <see cref="Sign"/> times body A at iteration <c>i + Shift</c>.</summary>
+    public sealed record Match(ImmutableDictionary<string, long> Shift, int Sign);
+
+    /// <summary>Finds how <paramref name="b"/> is a shifted copy of <paramref name="a"/>, or null.</summary>
+    public static Match? TryMatch(Term a, Term b, LoopSpace space)
+    {
+        if (a.BodyShapeKey != b.BodyShapeKey || a.Factors.Length != b.Factors.Length)
+        {
+            return null;
+        }
+
+        var fast = FastMatch(a, b, space);
+        if (fast is not null || !NeedsAlignment(a))
+        {
+            return fast;
+        }
+
+        int tried = 0;
+        foreach (var (pairs, sign) in MatchFactors(a.Factors, b.Factors, ImmutableList<(AffineIndex, AffineIndex)>.Empty, 1))
+        {
+            if (++tried > MaxAlignments)
+            {
+                return null;
+            }
+
+            var shift = Solve(pairs, space);
+            if (shift is not null)
+            {
+                return new Match(shift, sign);
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>
+    /// Bodies are kept in a canonical order (products and sums sorted by key, symmetric calls'
+    /// arguments too), so B is A moved by n exactly when A shifted by n has B's key. The shift must take
+    /// A's first read onto some read of B of the same shape: those few candidates are tried.
+    /// </summary>
+    private static Match? FastMatch(Term a, Term b, LoopSpace space)
+    {
+        var first = a.Reads.FirstOrDefault();
+        if (first is null)
+        {
+            return a.BodyKey == b.BodyKey ? new Match(ImmutableDictionary<string, long>.Empty, 1) : null;
+        }
+
+        // Many reads of B share A's first read's shape (u[•] in a limiter); each distinct shift is tried once.
+        var tried = new HashSet<string>(StringComparer.Ordinal);
+        foreach (var candidate in b.Reads)
+        {
+            if (candidate.ShapeKey != first.ShapeKey || !tried.Add(candidate.Key))
+            {
+                continue;
+            }
+
+            var pairs = MatchReads(first, candidate, ImmutableList<(AffineIndex, AffineIndex)>.Empty);
+            var shift = pairs is null ? null : Solve(pairs, space);
+            if (shift is not null && a.Shift(shift).BodyKey == b.BodyKey)
+            {
+                return new Match(shift, 1);
+            }
+        }
+
+        return null;
+    }
+
+    /// <summary>Only antisymmetric flips need the full alignment search; everything else is canonical.</summary>
+    private static bool NeedsAlignment(Term a) => a.Factors.Any(NeedsAlignment);
+
+    private static bool NeedsAlignment(Expr e) => e switch
+    {
+        CallExpr c => c.Symmetry == CallSymmetry.Antisymmetric || c.Arguments.Any(s => s.Terms.Any(NeedsAlignment)),
+        ReciprocalExpr r => r.Denominator.Terms.Any(NeedsAlignment),
+        _ => false,
+    };
+
+    /// <summary>The integer shift vector that maps every first index of a pair onto its second, or null.</summary>
+    public static ImmutableDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    {
+        if (pairs.All(p => p.A.Constant.IsConstant && p.B.Constant.IsConstant && p.A.Linear.All(l => l.Value.IsConstant)))
+        {
+            return SolveConstant(pairs, space);
+        }
+
+        var unknowns = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
+        var rowsByMonomial = new List<Rational[]>();
+        foreach (var (a, b) in pairs)
+        {
+            if (a.LinearKey != b.LinearKey)
+            {
+                return null;
+            }
+
+            var difference = b.Constant - a.Constant;
+            var monomials = new HashSet<Monomial>(difference.Terms.Select(t => t.Key));
+            foreach (var v in unknowns)
+            {
+                foreach (var t in a.CoefficientOf(v.Name).Terms)
+                {
+                    monomials.Add(t.Key);
+                }
+            }
+
+            foreach (var m in monomials)
+            {
+                var row = new Rational[unknowns.Count + 1];
+                for (int k = 0; k < unknowns.Count; k++)
+                {
+                    row[k] = Coefficient(a.CoefficientOf(unknowns[k].Name), m) * Rational.FromInteger(unknowns[k].Step);
+                }
+
+                row[unknowns.Count] = Coefficient(difference, m);
+                rowsByMonomial.Add(row);
+            }
+        }
+
+        var x = LinearSolver.Solve(rowsByMonomial, unknowns.Count);
+        if (x is null || x.Any(value => !value.IsInteger))
+        {
+            return null;
+        }
+
+        var result = ImmutableDictionary.CreateBuilder<string, long>(StringComparer.Ordinal);
+        for (int k = 0; k < unknowns.Count; k++)
+        {
+            result[unknowns[k].Name] = (long)x[k].Numerator * unknowns[k].Step;
+        }
+
+        return result.ToImmutable();
+    }
+
+    /// <summary>The same system when no index carries a symbol (the common case): one row per pair.</summary>
+    private static ImmutableDictionary<string, long>? SolveConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    {
+        var unknowns = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
+        var rows = new List<Rational[]>(pairs.Count);
+        foreach (var (a, b) in pairs)
+        {
+            if (a.LinearKey != b.LinearKey)
+            {
+                return null;
+            }
+
+            var row = new Rational[unknowns.Count + 1];
+            for (int k = 0; k < unknowns.Count; k++)
+            {
+                row[k] = a.CoefficientOf(unknowns[k].Name).ConstantValue * Rational.FromInteger(unknowns[k].Step);
+            }
+
+            row[unknowns.Count] = b.Constant.ConstantValue - a.Constant.ConstantValue;
+            if (row.All(r => r.IsZero))
+            {
+                continue;
+            }
+
+            rows.Add(row);
+        }
+
+        var x = rows.Count == 0 ? new Rational[unknowns.Count].Select(_ => Rational.Zero).ToArray() : LinearSolver.Solve(rows, unknowns.Count);
+        if (x is null || x.Any(value => !value.IsInteger))
+        {
+            return null;
+        }
+
+        var result = ImmutableDictionary.CreateBuilder<string, long>(StringComparer.Ordinal);
+        for (int k = 0; k < unknowns.Count; k++)
+        {
+            result[unknowns[k].Name] = (long)x[k].Numerator * unknowns[k].Step;
+        }
+
+        return result.ToImmutable();
+    }
+
+    private static Rational Coefficient(SymPoly p, Monomial m)
+    {
+        foreach (var t in p.Terms)
+        {
+            if (t.Key.Equals(m))
+            {
+                return t.Value;
+            }
+        }
+
+        return Rational.Zero;
+    }
+
+    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchFactors(
+        ImmutableArray<Expr> a, ImmutableArray<Expr> b, ImmutableList<(AffineIndex, AffineIndex)> acc, int sign)
+    {
+        if (a.IsEmpty)
+        {
+            if (b.IsEmpty)
+            {
+                yield return (acc, sign);
+            }
+
+            yield break;
+        }
+
+        var first = a[0];
+        var restA = a.RemoveAt(0);
+        for (int k = 0; k < b.Length; k++)
+        {
+            if (b[k].ShapeKey != first.ShapeKey)
+            {
+                continue;
+            }
+
+            var restB = b.RemoveAt(k);
+            foreach (var (pairs, s) in MatchExpr(first, b[k], acc))
+            {
+                foreach (var result in MatchFactors(restA, restB, pairs, sign * s))
+                {
+                    yield return result;
+                }
+            }
+        }
+    }
+
+    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchExpr(
+        Expr x, Expr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    {
+        switch (x, y)
+        {
+            case (ReadExpr rx, ReadExpr ry):
+                var pairs = MatchReads(rx, ry, acc);
+                if (pairs is not null)
+                {
+                    yield return (pairs, 1);
+                }
+
+                yield break;
+
+            case (CallExpr cx, CallExpr cy) when cx.Function == cy.Function && cx.Arguments.Length == cy.Arguments.Length:
+                foreach (var r in MatchCall(cx, cy, acc))
+                {
+                    yield return r;
+                }
+
+                yield break;
+
+            case (ReciprocalExpr qx, ReciprocalExpr qy):
+                foreach (var r in MatchSum(qx.Denominator, qy.Denominator, acc))
+                {
+                    yield return r;
+                }
+
+                yield break;
+        }
+    }
+
+    private static ImmutableList<(AffineIndex, AffineIndex)>? MatchReads(ReadExpr x, ReadExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    {
+        if (x.Array != y.Array || x.Path != y.Path || x.Subscripts.Length != y.Subscripts.Length)
+        {
+            return null;
+        }
+
+        for (int g = 0; g < x.Subscripts.Length; g++)
+        {
+            var gx = x.Subscripts[g];
+            var gy = y.Subscripts[g];
+            if (gx.Length != gy.Length)
+            {
+                return null;
+            }
+
+            for (int k = 0; k < gx.Length; k++)
+            {
+                switch (gx[k], gy[k])
+                {
+                    case (AffineSubscript ax, AffineSubscript ay):
+                        acc = acc.Add((ax.Index, ay.Index));
+                        break;
+                    case (MappedSubscript mx, MappedSubscript my) when mx.Map == my.Map && mx.Arguments.Length == my.Arguments.Length:
+                        for (int n = 0; n < mx.Arguments.Length; n++)
+                        {
+                            acc = acc.Add((mx.Arguments[n], my.Arguments[n]));
+                        }
+
+                        break;
+                    default:
+                        return null;
+                }
+            }
+        }
+
+        return acc;
+    }
+
+    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchCall(
+        CallExpr x, CallExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    {
+        int n = x.Arguments.Length;
+        IEnumerable<(int[] Order, int[] ArgumentSigns, int Sign)> orders = x.Symmetry switch
+        {
+            CallSymmetry.Symmetric => Permutations(n).Select(p => (p, Enumerable.Repeat(1, n).ToArray(), 1)),
+            CallSymmetry.Antisymmetric when n >= 2 => new[]
+            {
+                (Enumerable.Range(0, n).ToArray(), Enumerable.Repeat(1, n).ToArray(), 1),
+                (Enumerable.Range(0, n).Select(k => k == 0 ? 1 : k == 1 ? 0 : k).ToArray(), Enumerable.Range(0, n).Select(k => k == 2 ? -1 : 1).ToArray(), -1),
+            },
+            _ => new[] { (Enumerable.Range(0, n).ToArray(), Enumerable.Repeat(1, n).ToArray(), 1) },
+        };
+
+        foreach (var (order, argumentSigns, sign) in orders)
+        {
+            foreach (var pairs in MatchArguments(x, y, order, argumentSigns, 0, acc))
+            {
+                yield return (pairs, sign);
+            }
+        }
+    }
+
+    private static IEnumerable<ImmutableList<(AffineIndex, AffineIndex)>> MatchArguments(
+        CallExpr x, CallExpr y, int[] order, int[] argumentSigns, int k, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    {
+        if (k == order.Length)
+        {
+            yield return acc;
+            yield break;
+        }
+
+        foreach (var (pairs, s) in MatchSum(x.Arguments[k], y.Arguments[order[k]], acc))
+        {
+            if (s == argumentSigns[k])
+            {
+                foreach (var r in MatchArguments(x, y, order, argumentSigns, k + 1, pairs))
+                {
+                    yield return r;
+                }
+            }
+        }
+    }
+
+    /// <summary>Matches two sums term by term; the sign says whether <c>y = x</c> or <c>y = −x</c>.</summary>
+    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchSum(
+        SumExpr x, SumExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    {
+        if (x.Terms.Length != y.Terms.Length)
+        {
+            yield break;
+        }
+
+        foreach (var r in MatchTerms(x.Terms, y.Terms, acc, 0))
+        {
+            yield return r;
+        }
+    }
+
+    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchTerms(
+        ImmutableArray<Term> x, ImmutableArray<Term> y, ImmutableList<(AffineIndex, AffineIndex)> acc, int sign)
+    {
+        if (x.IsEmpty)
+        {
+            yield return (acc, sign == 0 ? 1 : sign);
+            yield break;
+        }
+
+        var first = x[0];
+        for (int k = 0; k < y.Length; k++)
+        {
+            var candidate = y[k];
+            if (candidate.BodyShapeKey != first.BodyShapeKey)
+            {
+                continue;
+            }
+
+            if (first.IsInvariant)
+            {
+                int s = SignRelating(first.Coefficient, candidate.Coefficient, 1);
+                if (s != 0 && (sign == 0 || s == sign))
+                {
+                    foreach (var r in MatchTerms(x.RemoveAt(0), y.RemoveAt(k), acc, s))
+                    {
+                        yield return r;
+                    }
+                }
+
+                continue;
+            }
+
+            foreach (var (pairs, t) in MatchFactors(first.Factors, candidate.Factors, acc, 1))
+            {
+                int s = SignRelating(first.Coefficient, candidate.Coefficient, t);
+                if (s != 0 && (sign == 0 || s == sign))
+                {
+                    foreach (var r in MatchTerms(x.RemoveAt(0), y.RemoveAt(k), pairs, s))
+                    {
+                        yield return r;
+                    }
+                }
+            }
+        }
+    }
+
+    /// <summary>The overall sign s with <c>cy · t = s · cx</c>, or 0 when the coefficients are not related by a sign.</summary>
+    private static int SignRelating(SymPoly cx, SymPoly cy, int t)
+    {
+        var scaled = t > 0 ? cy : -cy;
+        if (scaled.Equals(cx))
+        {
+            return 1;
+        }
+
+        return (-scaled).Equals(cx) ? -1 : 0;
+    }
+
+    private static IEnumerable<int[]> Permutations(int n)
+    {
+        if (n > 4)
+        {
+            yield return Enumerable.Range(0, n).ToArray();
+            yield break;
+        }
+
+        foreach (var p in Permute(Enumerable.Range(0, n).ToList()))
+        {
+            yield return p.ToArray();
+        }
+    }
+
+    private static IEnumerable<List<int>> Permute(List<int> items)
+    {
+        if (items.Count <= 1)
+        {
+            yield return new List<int>(items);
+            yield break;
+        }
+
+        for (int k = 0; k < items.Count; k++)
+        {
+            var rest = new List<int>(items);
+            rest.RemoveAt(k);
+            foreach (var p in Permute(rest))
+            {
+                p.Insert(0, items[k]);
+                yield return p;
+            }
+        }
+    }
+}

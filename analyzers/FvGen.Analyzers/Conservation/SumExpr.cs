@@ -1,0 +1,193 @@
+using System;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// An expanded expression: a sum of terms with distinct bodies (terms with equal bodies are
+/// merged, zero terms dropped). All algebra of the extraction goes through here.
+/// </summary>
+internal sealed class SumExpr
+{
+    /// <summary>Expansion stops beyond this many terms (the checker then says it could not model the update).</summary>
+    public const int MaxTerms = 512;
+
+    private string? _key;
+    private string? _shapeKey;
+
+    private SumExpr(ImmutableArray<Term> terms) => Terms = terms;
+
+    public static SumExpr Zero { get; } = new(ImmutableArray<Term>.Empty);
+
+    public ImmutableArray<Term> Terms { get; }
+
+    /// <summary>Full identity (computed on first use: most intermediate sums never need it).</summary>
+    public string Key => _key ??= string.Join("+", Terms.Select(t => "(" + t.Coefficient + ")" + t.BodyKey));
+
+    public string ShapeKey => _shapeKey ??= string.Join("+", Terms.Select(t => t.BodyShapeKey).OrderBy(s => s, StringComparer.Ordinal));
+
+    public bool IsZero => Terms.IsEmpty;
+
+    /// <summary>True when nothing depends on the loop variables.</summary>
+    public bool IsInvariant => Terms.All(t => t.IsInvariant);
+
+    /// <summary>The value of an invariant sum as a coefficient.</summary>
+    public SymPoly InvariantValue => Terms.Where(t => t.IsInvariant).Select(t => t.Coefficient).Aggregate(SymPoly.Zero, (a, b) => a + b);
+
+    public IEnumerable<ReadExpr> Reads => Terms.SelectMany(t => t.Reads);
+
+    public static SumExpr Invariant(SymPoly value, int origin = -1) =>
+        Of(new[] { new Term(value, Array.Empty<Expr>(), origin < 0 ? ImmutableArray<int>.Empty : ImmutableArray.Create(origin)) });
+
+    public static SumExpr Factor(Expr factor, int origin = -1) =>
+        Of(new[] { new Term(SymPoly.One, new[] { factor }, origin < 0 ? ImmutableArray<int>.Empty : ImmutableArray.Create(origin)) });
+
+    public static SumExpr Of(IEnumerable<Term> terms)
+    {
+        var byBody = new Dictionary<string, (SymPoly Coefficient, Term First, List<int>? Origins)>(StringComparer.Ordinal);
+        var order = new List<string>();
+        foreach (var t in terms)
+        {
+            if (byBody.TryGetValue(t.BodyKey, out var current))
+            {
+                var origins = current.Origins ?? new List<int>(current.First.Origins);
+                origins.AddRange(t.Origins);
+                byBody[t.BodyKey] = (current.Coefficient + t.Coefficient, current.First, origins);
+            }
+            else
+            {
+                byBody[t.BodyKey] = (t.Coefficient, t, null);
+                order.Add(t.BodyKey);
+            }
+        }
+
+        if (byBody.Count > MaxTerms)
+        {
+            throw new ModelLimitException($"the expansion has more than {MaxTerms} terms");
+        }
+
+        var result = order
+            .OrderBy(k => k, StringComparer.Ordinal)
+            .Select(k => byBody[k])
+            .Where(e => !e.Coefficient.IsZero)
+            .Select(e => e.Origins is null ? e.First : new Term(e.Coefficient, e.First.Factors, e.Origins.Distinct().ToImmutableArray()))
+            .ToImmutableArray();
+        return new SumExpr(result);
+    }
+
+    public static SumExpr operator +(SumExpr a, SumExpr b) => a.IsZero ? b : b.IsZero ? a : Of(a.Terms.Concat(b.Terms));
+
+    public static SumExpr operator -(SumExpr a) => a.Scale(-SymPoly.One);
+
+    public static SumExpr operator -(SumExpr a, SumExpr b) => a + (-b);
+
+    public SumExpr Scale(SymPoly factor) =>
+        factor.IsZero ? Zero : new SumExpr(Terms.Select(t => t.WithCoefficient(t.Coefficient * factor)).ToImmutableArray());
+
+    public static SumExpr operator *(SumExpr a, SumExpr b)
+    {
+        if ((long)a.Terms.Length * b.Terms.Length > MaxTerms * 4L)
+        {
+            throw new ModelLimitException($"the product expands to more than {MaxTerms * 4} terms");
+        }
+
+        return Of(a.Terms.SelectMany(x => b.Terms.Select(y =>
+            new Term(x.Coefficient * y.Coefficient, CancelReciprocals(x.Factors.Concat(y.Factors)), x.Origins.AddRange(y.Origins)))));
+    }
+
+    /// <summary>Removes pairs <c>a · 1/a</c> from a product.</summary>
+    private static List<Expr> CancelReciprocals(IEnumerable<Expr> factors)
+    {
+        var list = factors.ToList();
+        for (int k = 0; k < list.Count; k++)
+        {
+            if (list[k] is ReciprocalExpr r && r.Denominator.Terms.Length == 1 && r.Denominator.Terms[0].Coefficient.IsOne && r.Denominator.Terms[0].Factors.Length == 1)
+            {
+                int match = list.FindIndex(f => f.Key == r.Denominator.Terms[0].Factors[0].Key);
+                if (match >= 0)
+                {
+                    list.RemoveAt(Math.Max(k, match));
+                    list.RemoveAt(Math.Min(k, match));
+                    k = -1;
+                }
+            }
+        }
+
+        return list;
+    }
+
+    /// <summary>
+    /// <c>1 / this</c>: exact for a monomial coefficient, a single factor distributes over the product,
+    /// and a true sum becomes a <see cref="ReciprocalExpr"/> with its leading coefficient pulled out.
+    /// </summary>
+    public SumExpr Reciprocal(Func<SymPoly, SymPoly> opaqueInvariant)
+    {
+        if (IsZero)
+        {
+            throw new ModelLimitException("a division by zero");
+        }
+
+        if (IsInvariant)
+        {
+            var value = InvariantValue;
+            return Invariant(value.TryReciprocal() ?? opaqueInvariant(value));
+        }
+
+        var origins = Terms.SelectMany(t => t.Origins).Distinct().ToImmutableArray();
+        if (Terms.Length == 1)
+        {
+            var t = Terms[0];
+            var coefficient = t.Coefficient.TryReciprocal() ?? opaqueInvariant(t.Coefficient);
+            var result = Invariant(coefficient);
+            foreach (var f in t.Factors)
+            {
+                var inverse = f is ReciprocalExpr r
+                    ? r.Denominator
+                    : Of(new[] { new Term(SymPoly.One, new Expr[] { new ReciprocalExpr(Of(new[] { new Term(SymPoly.One, new[] { f }, ImmutableArray<int>.Empty) })) }, origins) });
+                result *= inverse;
+            }
+
+            return result;
+        }
+
+        var lead = Terms[0].Coefficient;
+        var leadInverse = lead.TryReciprocal();
+        if (leadInverse is null)
+        {
+            return Factor(new ReciprocalExpr(StripOrigins()), -1).WithOrigins(origins);
+        }
+
+        return Factor(new ReciprocalExpr(Scale(leadInverse).StripOrigins())).Scale(leadInverse).WithOrigins(origins);
+    }
+
+    public SumExpr Shift(IReadOnlyDictionary<string, long> shift) => Of(Terms.Select(t => t.Shift(shift)));
+
+    /// <summary>An invariant that is a true sum (not a monomial) stands for itself as one opaque symbol.</summary>
+    public static SymPoly OpaqueInvariant(SymPoly value) => SymPoly.Symbol("(" + CSharpText.Of(value) + ")");
+
+    public SumExpr StripOrigins() => new(Terms.Select(t => new Term(t.Coefficient, t.Factors, ImmutableArray<int>.Empty)).ToImmutableArray());
+
+    public SumExpr WithOrigins(ImmutableArray<int> origins) => new(Terms.Select(t => new Term(t.Coefficient, t.Factors, origins)).ToImmutableArray());
+
+    /// <summary>C# text.</summary>
+    public string Render()
+    {
+        if (IsZero)
+        {
+            return "0";
+        }
+
+        var parts = new List<string>();
+        foreach (var t in Terms)
+        {
+            var (sign, text) = t.IsInvariant ? (t.Coefficient.LeadingSign, CSharpText.Of(t.Coefficient.LeadingSign < 0 ? -t.Coefficient : t.Coefficient)) : CSharpText.SignedProduct(t.Coefficient, t.RenderBody());
+            parts.Add((parts.Count == 0 ? (sign < 0 ? "-" : string.Empty) : (sign < 0 ? " - " : " + ")) + text);
+        }
+
+        return string.Concat(parts);
+    }
+
+    public override string ToString() => Render();
+}

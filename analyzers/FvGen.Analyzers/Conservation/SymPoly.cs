@@ -1,0 +1,169 @@
+using System;
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+using System.Text;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// A finite sum of exact rationals times monomials in loop-invariant symbols: a coefficient such as
+/// <c>−dt/dx</c>, the sum of a shift class (<c>−1/dx + 1/dx = 0</c>), or the linear part of an index
+/// (<c>nx + 1</c>). Zero terms are never stored, so a sum is zero exactly when it has no terms.
+/// </summary>
+internal sealed class SymPoly : IEquatable<SymPoly>
+{
+    private readonly string _key;
+
+    private SymPoly(ImmutableArray<KeyValuePair<Monomial, Rational>> terms)
+    {
+        Terms = terms;
+        _key = string.Join(" + ", terms.Select(t => t.Value + "*" + t.Key.Key));
+    }
+
+    public static SymPoly Zero { get; } = new(ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty);
+
+    public static SymPoly One { get; } = Constant(Rational.One);
+
+    /// <summary>Terms in monomial order, none zero.</summary>
+    public ImmutableArray<KeyValuePair<Monomial, Rational>> Terms { get; }
+
+    public bool IsZero => Terms.IsEmpty;
+
+    public bool IsOne => Terms.Length == 1 && Terms[0].Key.IsOne && Terms[0].Value.IsOne;
+
+    /// <summary>True when the value is a plain rational number (no symbols).</summary>
+    public bool IsConstant => Terms.IsEmpty || (Terms.Length == 1 && Terms[0].Key.IsOne);
+
+    public Rational ConstantValue => Terms.IsEmpty ? Rational.Zero : Terms.Where(t => t.Key.IsOne).Select(t => t.Value).FirstOrDefault();
+
+    public bool IsMonomial => Terms.Length == 1;
+
+    public static SymPoly Constant(Rational value) => Of(new[] { new KeyValuePair<Monomial, Rational>(Monomial.One, value) });
+
+    public static SymPoly Constant(long value) => Constant(Rational.FromInteger(value));
+
+    public static SymPoly Symbol(string name, int power = 1) =>
+        Of(new[] { new KeyValuePair<Monomial, Rational>(Monomial.Symbol(name, power), Rational.One) });
+
+    public static SymPoly Of(IEnumerable<KeyValuePair<Monomial, Rational>> terms)
+    {
+        var sum = new SortedDictionary<Monomial, Rational>();
+        foreach (var t in terms)
+        {
+            sum[t.Key] = sum.TryGetValue(t.Key, out var current) ? current + t.Value : t.Value;
+        }
+
+        return new SymPoly(sum.Where(t => !t.Value.IsZero).ToImmutableArray());
+    }
+
+    public static SymPoly operator +(SymPoly a, SymPoly b) => a.IsZero ? b : b.IsZero ? a : Of(a.Terms.Concat(b.Terms));
+
+    public static SymPoly operator -(SymPoly a) =>
+        new(a.Terms.Select(t => new KeyValuePair<Monomial, Rational>(t.Key, -t.Value)).ToImmutableArray());
+
+    public static SymPoly operator -(SymPoly a, SymPoly b) => a + (-b);
+
+    public static SymPoly operator *(SymPoly a, SymPoly b)
+    {
+        if (a.IsZero || b.IsZero)
+        {
+            return Zero;
+        }
+
+        if (a.IsOne)
+        {
+            return b;
+        }
+
+        if (b.IsOne)
+        {
+            return a;
+        }
+
+        return Of(a.Terms.SelectMany(x => b.Terms.Select(y => new KeyValuePair<Monomial, Rational>(x.Key * y.Key, x.Value * y.Value))));
+    }
+
+    public static SymPoly operator *(SymPoly a, Rational r) =>
+        r.IsZero ? Zero : new(a.Terms.Select(t => new KeyValuePair<Monomial, Rational>(t.Key, t.Value * r)).ToImmutableArray());
+
+    /// <summary>The reciprocal of a single monomial; null for a sum (which stays an opaque symbol).</summary>
+    public SymPoly? TryReciprocal()
+    {
+        if (!IsMonomial)
+        {
+            return null;
+        }
+
+        var t = Terms[0];
+        return new SymPoly(ImmutableArray.Create(new KeyValuePair<Monomial, Rational>(t.Key.Reciprocal(), Rational.One / t.Value)));
+    }
+
+    /// <summary>Sign of the leading term (used to pull a sign out of a canonical sum).</summary>
+    public int LeadingSign => Terms.IsEmpty ? 0 : Terms[0].Value.Sign;
+
+    public bool Equals(SymPoly? other) => other is not null && _key == other._key;
+
+    public override bool Equals(object? obj) => obj is SymPoly p && Equals(p);
+
+    public override int GetHashCode() => StringComparer.Ordinal.GetHashCode(_key);
+
+    /// <summary>Readable text: <c>-1/dx</c>, <c>dt/dx - dt/dy</c>, <c>0</c>.</summary>
+    public override string ToString()
+    {
+        if (IsZero)
+        {
+            return "0";
+        }
+
+        var sb = new StringBuilder();
+        bool first = true;
+        foreach (var t in Terms)
+        {
+            var value = t.Value;
+            if (!first)
+            {
+                sb.Append(value.Sign < 0 ? " - " : " + ");
+                value = value.Abs();
+            }
+
+            sb.Append(FormatTerm(value, t.Key));
+            first = false;
+        }
+
+        return sb.ToString();
+    }
+
+    private static string FormatTerm(Rational value, Monomial monomial)
+    {
+        if (monomial.IsOne)
+        {
+            return value.ToString();
+        }
+
+        string m = monomial.ToString();
+        bool startsWithOne = m.StartsWith("1/", StringComparison.Ordinal);
+        if (value.IsInteger)
+        {
+            if (value.Numerator.IsOne)
+            {
+                return m;
+            }
+
+            if (value == Rational.MinusOne)
+            {
+                return "-" + m;
+            }
+
+            return startsWithOne ? value + m.Substring(1) : value + "·" + m;
+        }
+
+        string num = value.Numerator.ToString(System.Globalization.CultureInfo.InvariantCulture);
+        string den = value.Denominator.ToString(System.Globalization.CultureInfo.InvariantCulture);
+        int slash = m.IndexOf('/');
+        string up = slash < 0 ? m : m.Substring(0, slash);
+        string down = slash < 0 ? string.Empty : m.Substring(slash + 1);
+        string upText = up == "1" ? num : (num == "1" ? up : num == "-1" ? "-" + up : num + "·" + up);
+        return upText + "/" + (down.Length == 0 ? den : "(" + den + "·" + down + ")");
+    }
+}

@@ -1,0 +1,59 @@
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace FvGen.Analyzers.Extraction;
+
+/// <summary>What every loop of one method shares: symbols, origins, face arrays, purity, the issues found.</summary>
+internal sealed class MethodContext
+{
+    public MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType)
+    {
+        Known = known;
+        Purity = purity;
+        ContainingType = containingType;
+    }
+
+    public KnownSymbols Known { get; }
+
+    public PurityChecker Purity { get; }
+
+    public INamedTypeSymbol? ContainingType { get; }
+
+    public OriginTable Origins { get; } = new();
+
+    /// <summary>Arrays filled by an earlier loop of the method (definitions): face data for later loops.</summary>
+    public HashSet<string> FaceArrays { get; } = new(System.StringComparer.Ordinal);
+
+    /// <summary>Those of <see cref="FaceArrays"/> whose definition read cells through two index maps.</summary>
+    public HashSet<string> InteriorFaceArrays { get; } = new(System.StringComparer.Ordinal);
+
+    public List<ConservationIssue> Issues { get; } = new();
+
+    private readonly HashSet<IMethodSymbol> _impureReported = new(SymbolEqualityComparer.Default);
+
+    public void ReportImpureCall(IInvocationOperation invocation, IMethodSymbol method, Purity purity)
+    {
+        if (!_impureReported.Add(method))
+        {
+            return;
+        }
+
+        var additional = purity.Location is null ? ImmutableArray<Location>.Empty : ImmutableArray.Create(purity.Location);
+        Issues.Add(new ConservationIssue(
+            DiagnosticIds.ImpureNumericalFlux,
+            ImmutableArray.Create(method.Name, purity.Reason),
+            invocation.Syntax.GetLocation(),
+            additional,
+            ImmutableDictionary<string, string?>.Empty));
+    }
+
+    public void ReportNotAnalyzed(string reason, SyntaxNode where) =>
+        Issues.Add(new ConservationIssue(
+            DiagnosticIds.NotAnalyzed,
+            ImmutableArray.Create(reason),
+            where.GetLocation(),
+            ImmutableArray<Location>.Empty,
+            ImmutableDictionary<string, string?>.Empty));
+}

@@ -1,0 +1,352 @@
+using System.Collections.Generic;
+using System.Collections.Immutable;
+using System.Linq;
+using FvGen.Analyzers.Conservation;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace FvGen.Analyzers.Extraction;
+
+/// <summary>
+/// Reads one method: walks its statements in order (binding locals declared outside loops), finds
+/// the loop nests, tells definitions (loops filling arrays that later loops read: face data) from
+/// updates, reads each update and runs the balance. Returns every issue with its location.
+/// </summary>
+internal static class MethodReader
+{
+    public static IReadOnlyList<ConservationIssue> Analyze(IOperation body, MethodContext method)
+    {
+        var nests = new List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)>();
+        var outer = new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default);
+        Walk(body, outer, nests, method);
+
+        MarkDefinitions(nests, method);
+        foreach (var (loop, bindings) in nests)
+        {
+            if (IsDefinition(loop, bindings, method, nests))
+            {
+                continue;
+            }
+
+            try
+            {
+                var update = new LoopNestReader(method, bindings).Read(loop);
+                foreach (var finding in BalanceChecker.Check(update))
+                {
+                    method.Issues.Add(ToIssue(finding, method.Origins, loop.Syntax));
+                }
+            }
+            catch (NotModelledException e)
+            {
+                method.ReportNotAnalyzed(e.Message, e.Where ?? loop.Syntax);
+            }
+            catch (ModelLimitException e)
+            {
+                method.ReportNotAnalyzed(e.Message, loop.Syntax);
+            }
+        }
+
+        return method.Issues;
+    }
+
+    private static void Walk(IOperation? operation, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests, MethodContext method)
+    {
+        switch (operation)
+        {
+            case null:
+                return;
+            case IMethodBodyOperation methodBody:
+                Walk(methodBody.BlockBody ?? methodBody.ExpressionBody, outer, nests, method);
+                return;
+            case IBlockOperation block:
+                foreach (var s in block.Operations)
+                {
+                    Walk(s, outer, nests, method);
+                }
+
+                return;
+            case IVariableDeclarationGroupOperation group:
+                foreach (var declarator in group.Declarations.SelectMany(d => d.Declarators))
+                {
+                    var initializer = declarator.GetVariableInitializer();
+                    outer[declarator.Symbol] = initializer is null
+                        ? new UnknownBinding($"the local `{declarator.Symbol.Name}` has no value before the loop")
+                        : BindOuter(declarator.Symbol, initializer.Value, outer, method);
+                }
+
+                return;
+            case IExpressionStatementOperation { Operation: ISimpleAssignmentOperation { Target: ILocalReferenceOperation local } assignment }:
+                outer[local.Local] = BindOuter(local.Local, assignment.Value, outer, method);
+                return;
+            case IExpressionStatementOperation expression when LoopNestReader.IsLoop(expression.Operation, method.Known):
+                AddNest(expression.Operation, outer, nests);
+                return;
+            case IForLoopOperation or IForEachLoopOperation:
+                AddNest(operation, outer, nests);
+                return;
+            case IWhileLoopOperation loop:
+                // A time or iteration loop around the kernels: its body is read like the method's.
+                foreach (var local in AssignedLocals(loop))
+                {
+                    outer[local] = local.Type is IArrayTypeSymbol || method.Known.IsSpan(local.Type)
+                        ? new ArrayBinding(local.Name, DataRole.Cell)
+                        : new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
+                }
+
+                Walk(loop.Body, outer, nests, method);
+                return;
+            case IConditionalOperation conditional:
+                Walk(conditional.WhenTrue, outer, nests, method);
+                Walk(conditional.WhenFalse, outer, nests, method);
+                return;
+            case IUsingOperation usingOperation:
+                Walk(usingOperation.Body, outer, nests, method);
+                return;
+            case ITryOperation tryOperation:
+                Walk(tryOperation.Body, outer, nests, method);
+                return;
+        }
+    }
+
+    private static void AddNest(IOperation loop, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests)
+    {
+        nests.Add((loop, new Dictionary<ISymbol, Binding>(outer, SymbolEqualityComparer.Default)));
+
+        // A local the loop assigns (a reduction such as the largest wave speed) is, after it, a symbol.
+        foreach (var local in AssignedLocals(loop))
+        {
+            if (outer.ContainsKey(local))
+            {
+                outer[local] = new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
+            }
+        }
+    }
+
+    private static Binding BindOuter(ILocalSymbol local, IOperation value, Dictionary<ISymbol, Binding> outer, MethodContext method)
+    {
+        var reader = new ExpressionReader(method, new Dictionary<ISymbol, Binding>(outer, SymbolEqualityComparer.Default));
+        try
+        {
+            if (local.Type is IArrayTypeSymbol || method.Known.IsSpan(local.Type) || method.Known.IsCellField(local.Type) || method.Known.IsFaceField(local.Type))
+            {
+                if (value is IArrayCreationOperation or IObjectCreationOperation || value is IInvocationOperation { TargetMethod.Name: not "AsSpan" })
+                {
+                    return new ArrayBinding(local.Name, method.Known.IsFaceField(local.Type) ? DataRole.Face : DataRole.Cell);
+                }
+
+                var (root, role) = reader.ArrayRoot(value);
+                return new ArrayBinding(root, role);
+            }
+
+            var result = reader.Read(value);
+            return result.IsInvariant ? new ValueBinding(result) : new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
+        }
+        catch (NotModelledException)
+        {
+            // Not needed unless a loop reads it; then the loop says why it could not.
+            return new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
+        }
+        catch (ModelLimitException)
+        {
+            return new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
+        }
+    }
+
+    /// <summary>
+    /// A loop is a definition (it fills face data) when every array it writes is assigned, not
+    /// incremented, and a later loop of the method reads it at a subscript that loop does not write
+    /// (<c>flux[i + 1] - flux[i]</c> into <c>r[i]</c>, or <c>faceFlux[f]</c> scattered to
+    /// <c>res[left[f]]</c>); those arrays are face data from then on. An array a later loop reads only
+    /// at the cell it writes (a residual used by an update) stays cell data, and the loop that fills
+    /// it is checked as an update.
+    /// </summary>
+    private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, MethodContext method)
+    {
+        var accesses = nests.Select(n => Accesses(n.Loop, n.Outer, method)).ToList();
+        for (int k = 0; k < nests.Count; k++)
+        {
+            var (written, read, _, onlyAssigned) = accesses[k];
+            if (written.Count == 0 || !onlyAssigned)
+            {
+                continue;
+            }
+
+            var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Differenced), System.StringComparer.Ordinal);
+            if (written.All(readLater.Contains) && !written.Any(read.Contains))
+            {
+                bool twoSided = MapsUsed(nests[k].Loop) > 1;
+                foreach (var w in written)
+                {
+                    method.FaceArrays.Add(w);
+                    if (twoSided)
+                    {
+                        method.InteriorFaceArrays.Add(w);
+                    }
+                }
+            }
+        }
+    }
+
+    private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method, List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests)
+    {
+        var (written, _, _, onlyAssigned) = Accesses(loop, outer, method);
+        return written.Count > 0 && onlyAssigned && written.All(method.FaceArrays.Contains);
+    }
+
+    private static (HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned) Accesses(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
+    {
+        var reader = new ExpressionReader(method, outer);
+        var written = new HashSet<string>(System.StringComparer.Ordinal);
+        var read = new HashSet<string>(System.StringComparer.Ordinal);
+        bool onlyAssigned = true;
+        var targets = new HashSet<IOperation>();
+        foreach (var op in loop.Descendants())
+        {
+            IOperation? target = op switch
+            {
+                IAssignmentOperation a => a.Target,
+                IIncrementOrDecrementOperation i => i.Target,
+                _ => null,
+            };
+            if (target is null)
+            {
+                continue;
+            }
+
+            var root = RootOf(target, reader);
+            if (root is not null)
+            {
+                written.Add(root);
+                targets.Add(target);
+                onlyAssigned &= op is ISimpleAssignmentOperation;
+            }
+        }
+
+        var subscripts = new Dictionary<string, HashSet<string>>(System.StringComparer.Ordinal);
+        foreach (var op in loop.Descendants())
+        {
+            if (op is IArrayElementReferenceOperation or IPropertyReferenceOperation { Property.IsIndexer: true } && !targets.Contains(op) && RootOf(op, reader) is { } root)
+            {
+                read.Add(root);
+                string index = SubscriptText(op);
+                if (!subscripts.TryGetValue(root, out var set))
+                {
+                    subscripts[root] = set = new HashSet<string>(System.StringComparer.Ordinal);
+                }
+
+                set.Add(index);
+            }
+        }
+
+        var writtenAt = new HashSet<string>(targets.Select(SubscriptText), System.StringComparer.Ordinal);
+        var differenced = new HashSet<string>(subscripts.Where(s => s.Value.Any(i => !writtenAt.Contains(i))).Select(s => s.Key), System.StringComparer.Ordinal);
+        return (written, read, differenced, onlyAssigned);
+    }
+
+    /// <summary>How many distinct index maps the loop reads cells through (<c>u[left[f]]</c>, <c>u[right[f]]</c>: two).</summary>
+    private static int MapsUsed(IOperation loop)
+    {
+        var maps = new HashSet<string>(System.StringComparer.Ordinal);
+        foreach (var op in loop.Descendants())
+        {
+            var indices = op switch
+            {
+                IArrayElementReferenceOperation e => e.Indices.ToList(),
+                IPropertyReferenceOperation { Property.IsIndexer: true } p => p.Arguments.Select(a => a.Value).ToList(),
+                _ => new List<IOperation>(),
+            };
+            foreach (var index in indices)
+            {
+                var inner = index is IConversionOperation c ? c.Operand : index;
+                if (inner is IArrayElementReferenceOperation or IPropertyReferenceOperation { Property.IsIndexer: true })
+                {
+                    maps.Add(SubscriptText(inner) + "@" + inner.Syntax.ToString().Split('[')[0]);
+                }
+                else if (inner is ILocalReferenceOperation local)
+                {
+                    maps.Add("local:" + local.Local.Name);
+                }
+            }
+        }
+
+        return maps.Count(m => !m.StartsWith("local:", System.StringComparison.Ordinal)) > 1 ? 2 : maps.Count(m => m.StartsWith("local:", System.StringComparison.Ordinal)) > 1 ? 2 : 1;
+    }
+
+    private static string SubscriptText(IOperation element)
+    {
+        while (element is IFieldReferenceOperation { Instance: { } instance })
+        {
+            element = instance;
+        }
+
+        return element switch
+        {
+            IArrayElementReferenceOperation e => string.Join(",", e.Indices.Select(i => i.Syntax.ToString().Replace(" ", string.Empty))),
+            IPropertyReferenceOperation p => string.Join(",", p.Arguments.Select(a => a.Value.Syntax.ToString().Replace(" ", string.Empty))),
+            _ => string.Empty,
+        };
+    }
+
+    private static string? RootOf(IOperation target, ExpressionReader reader)
+    {
+        while (target is IFieldReferenceOperation { Instance: { } instance })
+        {
+            target = instance;
+        }
+
+        try
+        {
+            return target switch
+            {
+                IArrayElementReferenceOperation e => reader.ArrayRoot(Innermost(e)).Root,
+                IPropertyReferenceOperation { Property.IsIndexer: true, Instance: { } instance } => reader.ArrayRoot(instance).Root,
+                _ => null,
+            };
+        }
+        catch (NotModelledException)
+        {
+            return null;
+        }
+    }
+
+    private static IOperation Innermost(IArrayElementReferenceOperation element) =>
+        element.ArrayReference is IArrayElementReferenceOperation inner ? Innermost(inner) : element.ArrayReference;
+
+    private static IEnumerable<ILocalSymbol> AssignedLocals(IOperation loop) =>
+        loop.Descendants()
+            .Select(op => op switch
+            {
+                IAssignmentOperation a => a.Target,
+                IIncrementOrDecrementOperation i => i.Target,
+                _ => null,
+            })
+            .OfType<ILocalReferenceOperation>()
+            .Select(l => l.Local)
+            .Distinct(SymbolEqualityComparer.Default)
+            .Cast<ILocalSymbol>();
+
+    private static ConservationIssue ToIssue(Finding finding, OriginTable origins, SyntaxNode loop)
+    {
+        var primary = finding.Primary.Select(o => origins[o]).Where(l => l is not null).Cast<Location>().ToList();
+        var additional = finding.Additional.Select(o => origins[o]).Where(l => l is not null).Cast<Location>().ToList();
+        var location = primary.FirstOrDefault() ?? loop.GetLocation();
+        var rest = primary.Skip(1).Concat(additional).Where(l => l != location).Distinct().ToImmutableArray();
+        string id = finding.Kind switch
+        {
+            FindingKind.DroppedFaceTerm => DiagnosticIds.DroppedFaceTerm,
+            FindingKind.UnbalancedFaceTerm => DiagnosticIds.UnbalancedFaceTerm,
+            FindingKind.MismatchedFluxEvaluations => DiagnosticIds.MismatchedFluxEvaluations,
+            FindingKind.OneSidedScatter => DiagnosticIds.OneSidedScatter,
+            _ => DiagnosticIds.InPlaceSweep,
+        };
+        var properties = finding.Properties;
+        if (origins[finding.WriteOrigin] is { } write)
+        {
+            properties = properties
+                .SetItem(FindingProperties.WriteStart, write.SourceSpan.Start.ToString(System.Globalization.CultureInfo.InvariantCulture))
+                .SetItem(FindingProperties.WriteLength, write.SourceSpan.Length.ToString(System.Globalization.CultureInfo.InvariantCulture));
+        }
+
+        return new ConservationIssue(id, finding.Arguments, location, rest, properties);
+    }
+}

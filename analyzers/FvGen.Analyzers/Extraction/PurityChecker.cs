@@ -1,0 +1,179 @@
+using System.Collections.Concurrent;
+using System.Linq;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.Operations;
+
+namespace FvGen.Analyzers.Extraction;
+
+/// <summary>What the checker knows about the effects of a method.</summary>
+internal enum PurityKind
+{
+    /// <summary>Reads its arguments, writes nothing outside itself.</summary>
+    Pure,
+
+    /// <summary>Writes state outside itself, or calls code that does.</summary>
+    Impure,
+
+    /// <summary>Metadata the checker cannot see into.</summary>
+    Unknown,
+}
+
+/// <summary>A verdict with the reason (<c>writes the field `calls`</c>) and where.</summary>
+internal sealed record Purity(PurityKind Kind, string Reason, Location? Location)
+{
+    public static Purity Pure { get; } = new(PurityKind.Pure, string.Empty, null);
+}
+
+/// <summary>
+/// Decides whether a flux or limiter writes state outside itself: assignments to fields, to
+/// elements of arrays it did not create, to <c>ref</c>/<c>out</c> parameters, or calls of methods
+/// that do. Source methods are read through their operations; metadata is trusted only for the
+/// math and span types of the framework and FvGen's own value types. Cached per compilation.
+/// </summary>
+internal sealed class PurityChecker
+{
+    private const int MaxDepth = 8;
+    private readonly Compilation _compilation;
+    private readonly ConcurrentDictionary<IMethodSymbol, Purity> _cache = new(SymbolEqualityComparer.Default);
+
+    public PurityChecker(Compilation compilation) => _compilation = compilation;
+
+    public Purity Classify(IMethodSymbol method) => Classify(method, 0);
+
+    private Purity Classify(IMethodSymbol method, int depth)
+    {
+        method = method.ReducedFrom ?? method;
+        method = method.OriginalDefinition;
+        if (_cache.TryGetValue(method, out var known))
+        {
+            return known;
+        }
+
+        var result = Compute(method, depth);
+        _cache.TryAdd(method, result);
+        return result;
+    }
+
+    private Purity Compute(IMethodSymbol method, int depth)
+    {
+        if (method.DeclaringSyntaxReferences.IsEmpty)
+        {
+            return IsTrustedMetadata(method) ? Purity.Pure : new Purity(PurityKind.Unknown, string.Empty, null);
+        }
+
+        if (depth > MaxDepth)
+        {
+            return new Purity(PurityKind.Unknown, string.Empty, null);
+        }
+
+        // A partial method without a body yet (the generator writes it) is treated as pure.
+        foreach (var reference in method.DeclaringSyntaxReferences)
+        {
+            var syntax = reference.GetSyntax();
+#pragma warning disable RS1030 // The callee lives in another tree; one model per callee, cached for the compilation.
+            var model = _compilation.GetSemanticModel(syntax.SyntaxTree);
+#pragma warning restore RS1030
+            var body = model.GetOperation(syntax);
+            if (body is null)
+            {
+                continue;
+            }
+
+            foreach (var op in body.Descendants())
+            {
+                var verdict = Inspect(op, method, depth);
+                if (verdict.Kind != PurityKind.Pure)
+                {
+                    return verdict;
+                }
+            }
+        }
+
+        return Purity.Pure;
+    }
+
+    private Purity Inspect(IOperation op, IMethodSymbol owner, int depth)
+    {
+        switch (op)
+        {
+            case IAssignmentOperation assignment when WritesOutside(assignment.Target, owner, out string what):
+                return new Purity(PurityKind.Impure, "writes " + what, assignment.Syntax.GetLocation());
+            case IIncrementOrDecrementOperation increment when WritesOutside(increment.Target, owner, out string what):
+                return new Purity(PurityKind.Impure, "writes " + what, increment.Syntax.GetLocation());
+            case IInvocationOperation invocation:
+            {
+                var callee = invocation.TargetMethod;
+                if (SymbolEqualityComparer.Default.Equals(callee.OriginalDefinition, owner.OriginalDefinition))
+                {
+                    return Purity.Pure;
+                }
+
+                var verdict = Classify(callee, depth + 1);
+                return verdict.Kind == PurityKind.Impure
+                    ? new Purity(PurityKind.Impure, "calls `" + callee.Name + "`, which " + verdict.Reason, invocation.Syntax.GetLocation())
+                    : Purity.Pure;
+            }
+
+            default:
+                return Purity.Pure;
+        }
+    }
+
+    private static bool WritesOutside(IOperation target, IMethodSymbol owner, out string what)
+    {
+        what = "`" + target.Syntax + "`";
+        switch (target)
+        {
+            case ILocalReferenceOperation local:
+                return local.Local.IsRef;
+            case IParameterReferenceOperation parameter:
+                return parameter.Parameter.RefKind is RefKind.Ref or RefKind.Out;
+            case IFieldReferenceOperation field:
+                if (field.Field.IsStatic)
+                {
+                    what = "the static field `" + field.Field.Name + "`";
+                    return true;
+                }
+
+                // A field of a struct local being built is the method's own state.
+                if (field.Instance is ILocalReferenceOperation { Local.IsRef: false } or IFieldReferenceOperation { Instance: ILocalReferenceOperation { Local.IsRef: false } })
+                {
+                    return false;
+                }
+
+                what = "the field `" + field.Field.Name + "`";
+                return true;
+            case IArrayElementReferenceOperation element:
+                return !(element.ArrayReference is ILocalReferenceOperation { Local.IsRef: false } local2 && CreatedLocally(local2.Local, owner));
+            case IPropertyReferenceOperation property:
+                return !(property.Instance is ILocalReferenceOperation { Local.IsRef: false } && !property.Property.IsIndexer);
+            default:
+                return true;
+        }
+    }
+
+    private static bool CreatedLocally(ILocalSymbol local, IMethodSymbol owner) =>
+        local.DeclaringSyntaxReferences.Any(r => r.GetSyntax().ToString().Contains("new ") || r.GetSyntax().ToString().Contains("stackalloc"));
+
+    private static bool IsTrustedMetadata(IMethodSymbol method)
+    {
+        var type = method.ContainingType;
+        if (type is null)
+        {
+            return false;
+        }
+
+        string ns = type.ContainingNamespace?.ToDisplayString() ?? string.Empty;
+        if (ns == "System" && type.Name is "Math" or "MathF" or "Double" or "Single" or "Int32" or "Int64" or "Span" or "ReadOnlySpan" or "MemoryExtensions")
+        {
+            return true;
+        }
+
+        if (ns.StartsWith("System.Numerics", System.StringComparison.Ordinal))
+        {
+            return true;
+        }
+
+        return ns == "FvGen.Geometry" || (ns == "FvGen.Fields" && method.MethodKind == MethodKind.PropertyGet);
+    }
+}

@@ -1,0 +1,43 @@
+using System.Collections.Immutable;
+using FvGen.Analyzers.Tests.Verifiers;
+using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp;
+using Microsoft.CodeAnalysis.Diagnostics;
+
+namespace FvGen.Analyzers.Tests.Harness;
+
+/// <summary>
+/// Compiles a source against .NET 10 and the FvGen runtime and runs every conservation rule on it,
+/// collecting analyzer exceptions instead of hiding them (they would surface as AD0001).
+/// </summary>
+internal static class AnalyzerRun
+{
+    public sealed record Result(ImmutableArray<Diagnostic> Compiler, ImmutableArray<Diagnostic> Analyzer, IReadOnlyList<Exception> Exceptions)
+    {
+        public IEnumerable<Diagnostic> Fvc => Analyzer.Where(d => d.Id.StartsWith("FVC", StringComparison.Ordinal));
+
+        public IEnumerable<Diagnostic> CompilerErrors => Compiler.Where(d => d.Severity == DiagnosticSeverity.Error);
+    }
+
+    public static async Task<Result> RunAsync(string source, string? editorConfigAllMethods = null)
+    {
+        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest), path: "/0/Kernel.cs");
+        var compilation = CSharpCompilation.Create(
+            "Corpus",
+            [tree],
+            TestReferences.All,
+            new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
+        var exceptions = new List<Exception>();
+        var options = new CompilationWithAnalyzersOptions(
+            new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
+            (e, _, _) => { lock (exceptions) { exceptions.Add(e); } },
+            concurrentAnalysis: false,
+            logAnalyzerExecutionTime: false);
+        var withAnalyzers = compilation.WithAnalyzers([.. AllRules.Analyzers()], options);
+        var analyzer = await withAnalyzers.GetAnalyzerDiagnosticsAsync();
+        return new Result(compilation.GetDiagnostics(), analyzer, exceptions);
+    }
+
+    public static string Describe(IEnumerable<Diagnostic> diagnostics) =>
+        string.Join("\n", diagnostics.Select(d => $"{d.Id} {d.Location.GetLineSpan().StartLinePosition}: {d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)}"));
+}

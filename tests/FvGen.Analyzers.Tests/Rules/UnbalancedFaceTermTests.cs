@@ -1,0 +1,58 @@
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Rules.UnbalancedFaceTermAnalyzer>;
+
+namespace FvGen.Analyzers.Tests.Rules;
+
+public sealed class UnbalancedFaceTermTests
+{
+    [Fact]
+    public Task SignSlipNamesTheWeightsAndTheFix() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Upwind
+            {
+                [ConservativeUpdate]
+                public static void Rate(double[] f, double[] r, double dx)
+                {
+                    for (int i = 0; i < r.Length; i++)
+                        r[i] = -({|#1:f[i + 1]|} + {|#0:f[i]|}) / dx;
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.UnbalancedFaceTerm).WithLocation(0).WithLocation(1)
+                .WithArguments("f[i]", "`f[i]` -1/dx, `f[i + 1]` -1/dx", "-2/dx", "0", "for the difference to cancel, `f[i]` needs weight 1/dx"));
+
+    [Fact]
+    public Task UpdateThatLosesHalfTheOldTotal() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class LaxFriedrichs
+            {
+                static double F(double u) => 0.5 * u * u;
+
+                [ConservativeUpdate]
+                public static void Step(double[] u, double[] un, double c)
+                {
+                    for (int i = 1; i < u.Length - 1; i++)
+                        un[i] = 0.25 * ({|#0:u[i - 1]|} + {|#1:u[i + 1]|}) - 0.5 * c * (F(u[i + 1]) - F(u[i - 1]));
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.UnbalancedFaceTerm).WithLocation(0).WithLocation(1)
+                .WithArguments("u[i - 1]", "`u[i - 1]` 1/4, `u[i + 1]` 1/4", "1/2", "1", "an update must carry the old total over with weight exactly 1"));
+
+    [Fact]
+    public Task ConservativeLaplacianIsQuiet() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Heat
+            {
+                [ConservativeUpdate]
+                public static void Rate(double[] t, double[] r, double k, double dx)
+                {
+                    double c = k / (dx * dx);
+                    for (int i = 1; i < t.Length - 1; i++)
+                        r[i] = c * (t[i + 1] - 2 * t[i] + t[i - 1]);
+                }
+            }
+            """);
+}
