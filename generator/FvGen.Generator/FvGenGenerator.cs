@@ -72,7 +72,9 @@ public sealed class FvGenGenerator : IIncrementalGenerator
             return null;
         }
 
-        if (!TypeLocation.AllPartial(type, ct) || FluxSignature.Boundary(method, ctx.Attributes[0], problems: null) is not { } found)
+        if (!TypeLocation.AllPartial(type, ct)
+            || BoundaryNameCheck.Conflict(type) is not null
+            || FluxSignature.Boundary(method, ctx.Attributes[0], problems: null) is not { } found)
         {
             return null;
         }

@@ -68,11 +68,16 @@ internal static class Descriptors
         "Residual kernel must live in partial types",
         "Residual kernel '{0}' is in type '{1}', which is not declared partial; the generator cannot add the kernel body or the Boundary enum");
 
+    public static readonly DiagnosticDescriptor BoundaryNameTaken = Create(
+        DiagnosticIds.BoundaryNameTaken,
+        "The name Boundary is taken in a type with boundary fluxes",
+        "'{0}' declares boundary fluxes, so the generator adds a nested enum 'Boundary' to it, but the type already has a member named 'Boundary'; rename that member");
+
     public static readonly DiagnosticDescriptor[] All =
     {
         StateNotPartialStruct, StateComponentNotDouble, NumericalFluxSignature, BoundaryFluxSignature,
         KernelNotStaticPartialVoid, KernelParameters, KernelFluxNotFound, ReconstructionNotAvailable,
-        BoundaryKindUnknown, FluxStateMismatch, ModeNotAvailable, ContainingTypeNotPartial,
+        BoundaryKindUnknown, FluxStateMismatch, ModeNotAvailable, ContainingTypeNotPartial, BoundaryNameTaken,
     };
 
     private static DiagnosticDescriptor Create(string id, string title, string message) =>

@@ -15,4 +15,5 @@ internal static class DiagnosticIds
     public const string FluxStateMismatch = "FVG0010";
     public const string ModeNotAvailable = "FVG0011";
     public const string ContainingTypeNotPartial = "FVG0012";
+    public const string BoundaryNameTaken = "FVG0013";
 }

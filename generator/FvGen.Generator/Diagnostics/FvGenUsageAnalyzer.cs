@@ -37,9 +37,19 @@ public sealed class FvGenUsageAnalyzer : DiagnosticAnalyzer
             start.RegisterSymbolAction(
                 symbol =>
                 {
-                    if (symbol.Symbol is INamedTypeSymbol type && Find(type, stateAttribute) is not null)
+                    if (symbol.Symbol is not INamedTypeSymbol type)
+                    {
+                        return;
+                    }
+
+                    if (Find(type, stateAttribute) is not null)
                     {
                         Report(symbol, problems => ConservedStateParser.Parse(type, problems, symbol.CancellationToken));
+                    }
+
+                    if (Boundaries.BoundaryNameCheck.Check(type) is { } taken)
+                    {
+                        symbol.ReportDiagnostic(taken.ToDiagnostic());
                     }
                 },
                 SymbolKind.NamedType);

@@ -19,8 +19,6 @@ namespace FvGen.Generator.Kernels;
 /// </summary>
 internal static class ResidualKernelParser
 {
-    private const string GeneratorPathMarker = "FvGen.Generator";
-
     public static ResidualKernelModel? Parse(IMethodSymbol method, AttributeData attribute, List<Problem>? problems, CancellationToken cancellationToken)
     {
         var location = method.Locations.Length > 0 ? method.Locations[0] : null;
@@ -171,6 +169,11 @@ internal static class ResidualKernelParser
         }
 
         var boundaries = BoundaryFluxesOf(type);
+        if (boundaries.Count > 0 && Boundaries.BoundaryNameCheck.Conflict(type) is not null)
+        {
+            return null; // FVG0013 is reported on the type's own member named Boundary.
+        }
+
         if (boundaries.Count == 0 && parameters.Any(p => p.Role == ParameterRole.Boundaries))
         {
             problems?.Add(new Problem(
@@ -560,7 +563,7 @@ internal static class ResidualKernelParser
     }
 
     private static bool IsGenerated(IMethodSymbol implementation) =>
-        implementation.DeclaringSyntaxReferences.All(r => r.SyntaxTree.FilePath.IndexOf(GeneratorPathMarker, StringComparison.Ordinal) >= 0);
+        implementation.DeclaringSyntaxReferences.All(r => GeneratedTrees.IsOurs(r.SyntaxTree));
 
     private static bool HasAttribute(ISymbol symbol, string name) =>
         symbol.GetAttributes().Any(a => a.AttributeClass?.ToDisplayString() == name);

@@ -49,6 +49,7 @@ public sealed class UsageDiagnosticTests
         { "FVG0011", "public static partial class P {\n" + Flux + "\n[ResidualKernel(nameof(Central), Mode = ExecutionMode.ParallelColouredScatter)] public static partial void Spans(UnstructuredMesh mesh, ReadOnlySpan<Heat> u, Span<Heat> r); }", "Spans" },
         { "FVG0011", "public static partial class P {\n" + Flux + "\n[ResidualKernel(nameof(Central), Mode = ExecutionMode.SerialScatter)] public static partial void Twice(StructuredGrid1D grid, ReadOnlySpan<Heat> u, Span<Heat> r, ExecutionMode mode); }", "Twice" },
         { "FVG0012", "public static class Closed {\n" + Flux + "\n[ResidualKernel(nameof(Central))] public static partial void Shut(StructuredGrid1D grid, ReadOnlySpan<Heat> u, Span<Heat> r); }", "Shut" },
+        { "FVG0013", "public static partial class P {\n" + Flux + "\npublic const int Boundary = 3;\n[BoundaryFlux(BoundaryKind.Wall)] public static Heat Wall(in Heat inside, in FaceGeometry face) => inside;\n[ResidualKernel(nameof(Central))] public static partial void Taken(StructuredGrid1D grid, ReadOnlySpan<Heat> u, Span<Heat> r); }", "Boundary" },
     };
 
     [Theory]
