@@ -571,7 +571,7 @@ internal static class BalanceChecker
 
         if (divisor is null)
         {
-            return (write.Value, null);
+            return InverseMeasureWeighted(write);
         }
 
         var measure = divisor.Denominator.Terms[0].Factors[0];
@@ -591,6 +591,50 @@ internal static class BalanceChecker
             return new Term(t.Coefficient, factors, t.Origins);
         });
         return (SumExpr.Of(weighted), measure);
+    }
+
+    /// <summary>
+    /// A precomputed inverse measure (<c>* invVol[c]</c>): a factor indexed exactly like the target that
+    /// multiplies every term reaching beyond the cell, from an array the write reads nowhere else (so
+    /// <c>u[i] * (u[i + 1] - u[i - 1])</c> is not mistaken for one). The conserved total is then
+    /// Σ value / factor, and the factor is divided out.
+    /// </summary>
+    private static (SumExpr Sum, Expr? Measure) InverseMeasureWeighted(UpdateWrite write)
+    {
+        var targetKeys = new HashSet<string>(write.Subscripts.SelectMany(g => g).Select(s => s.Key), StringComparer.Ordinal);
+        bool ReachesBeyond(Term t) => t.Reads.Any(r => r.Role != DataRole.Cell || r.AllSubscripts.Any(s => !targetKeys.Contains(s.Key)));
+        var beyond = write.Value.Terms.Where(ReachesBeyond).ToList();
+        if (beyond.Count == 0)
+        {
+            return (write.Value, null);
+        }
+
+        var candidate = beyond[0].Factors.OfType<ReadExpr>().FirstOrDefault(w =>
+            w.Role == DataRole.Cell && !w.IsLoopIndex && SubscriptKey(w) == write.SubscriptKey
+            && beyond.All(t => t.Factors.Any(f => f.Key == w.Key))
+            && write.Value.Terms.All(t => t.Reads.All(r => r.Array != w.Array || r.Key == w.Key)));
+        if (candidate is null)
+        {
+            return (write.Value, null);
+        }
+
+        var inverse = new ReciprocalExpr(SumExpr.Factor(candidate).StripOrigins());
+        var weighted = write.Value.Terms.Select(t =>
+        {
+            var factors = t.Factors.ToList();
+            int k = factors.FindIndex(f => f.Key == candidate.Key);
+            if (k >= 0)
+            {
+                factors.RemoveAt(k);
+            }
+            else
+            {
+                factors.Add(inverse);
+            }
+
+            return new Term(t.Coefficient, factors, t.Origins);
+        });
+        return (SumExpr.Of(weighted), inverse);
     }
 
     private static bool IsTargetElement(ReadExpr read, UpdateWrite write) =>

@@ -23,8 +23,10 @@ internal static class MethodReader
         MarkDefinitions(nests, method);
         foreach (var (loop, bindings) in nests)
         {
-            if (IsDefinition(loop, bindings, method, nests))
+            if (IsDefinition(loop, bindings, method) || !WritesElements(loop))
             {
+                // A definition fills face data; a loop writing no array element (a reduction such as
+                // the largest wave speed) updates nothing that could be conservative or not.
                 continue;
             }
 
@@ -187,7 +189,7 @@ internal static class MethodReader
         }
     }
 
-    private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method, List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests)
+    private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
     {
         var (written, _, _, onlyAssigned) = Accesses(loop, outer, method);
         return written.Count > 0 && onlyAssigned && written.All(method.FaceArrays.Contains);
@@ -241,6 +243,25 @@ internal static class MethodReader
         var writtenAt = new HashSet<string>(targets.Select(SubscriptText), System.StringComparer.Ordinal);
         var differenced = new HashSet<string>(subscripts.Where(s => s.Value.Any(i => !writtenAt.Contains(i))).Select(s => s.Key), System.StringComparer.Ordinal);
         return (written, read, differenced, onlyAssigned);
+    }
+
+    private static bool WritesElements(IOperation loop) =>
+        loop.Descendants().Any(op => op switch
+        {
+            IAssignmentOperation a => IsElementTarget(a.Target),
+            IIncrementOrDecrementOperation i => IsElementTarget(i.Target),
+            _ => false,
+        });
+
+    private static bool IsElementTarget(IOperation target)
+    {
+        while (target is IFieldReferenceOperation { Instance: { } instance })
+        {
+            target = instance;
+        }
+
+        return target is IArrayElementReferenceOperation or IPropertyReferenceOperation { Property.IsIndexer: true }
+            || (target is ILocalReferenceOperation local && local.Local.IsRef);
     }
 
     /// <summary>How many distinct index maps the loop reads cells through (<c>u[left[f]]</c>, <c>u[right[f]]</c>: two).</summary>

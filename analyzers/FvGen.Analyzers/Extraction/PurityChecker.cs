@@ -61,6 +61,12 @@ internal sealed class PurityChecker
             return IsTrustedMetadata(method) ? Purity.Pure : new Purity(PurityKind.Unknown, string.Empty, null);
         }
 
+        if (method.IsAbstract || method.IsExtern || method.MethodKind == MethodKind.DelegateInvoke)
+        {
+            // An interface or abstract member: whichever implementation runs is not known here.
+            return new Purity(PurityKind.Unknown, string.Empty, null);
+        }
+
         if (depth > MaxDepth)
         {
             return new Purity(PurityKind.Unknown, string.Empty, null);
@@ -96,9 +102,9 @@ internal sealed class PurityChecker
     {
         switch (op)
         {
-            case IAssignmentOperation assignment when WritesOutside(assignment.Target, owner, out string what):
+            case IAssignmentOperation assignment when WritesOutside(assignment.Target, out string what):
                 return new Purity(PurityKind.Impure, "writes " + what, assignment.Syntax.GetLocation());
-            case IIncrementOrDecrementOperation increment when WritesOutside(increment.Target, owner, out string what):
+            case IIncrementOrDecrementOperation increment when WritesOutside(increment.Target, out string what):
                 return new Purity(PurityKind.Impure, "writes " + what, increment.Syntax.GetLocation());
             case IInvocationOperation invocation:
             {
@@ -119,7 +125,7 @@ internal sealed class PurityChecker
         }
     }
 
-    private static bool WritesOutside(IOperation target, IMethodSymbol owner, out string what)
+    private static bool WritesOutside(IOperation target, out string what)
     {
         what = "`" + target.Syntax + "`";
         switch (target)
@@ -144,7 +150,7 @@ internal sealed class PurityChecker
                 what = "the field `" + field.Field.Name + "`";
                 return true;
             case IArrayElementReferenceOperation element:
-                return !(element.ArrayReference is ILocalReferenceOperation { Local.IsRef: false } local2 && CreatedLocally(local2.Local, owner));
+                return !(element.ArrayReference is ILocalReferenceOperation { Local.IsRef: false } local2 && CreatedLocally(local2.Local));
             case IPropertyReferenceOperation property:
                 return !(property.Instance is ILocalReferenceOperation { Local.IsRef: false } && !property.Property.IsIndexer);
             default:
@@ -152,8 +158,15 @@ internal sealed class PurityChecker
         }
     }
 
-    private static bool CreatedLocally(ILocalSymbol local, IMethodSymbol owner) =>
-        local.DeclaringSyntaxReferences.Any(r => r.GetSyntax().ToString().Contains("new ") || r.GetSyntax().ToString().Contains("stackalloc"));
+    /// <summary>A local array the method created itself (scratch space) is its own state.</summary>
+    private static bool CreatedLocally(ILocalSymbol local) =>
+        local.DeclaringSyntaxReferences.Any(r => r.GetSyntax() is Microsoft.CodeAnalysis.CSharp.Syntax.VariableDeclaratorSyntax
+        {
+            Initializer.Value: Microsoft.CodeAnalysis.CSharp.Syntax.ArrayCreationExpressionSyntax
+                or Microsoft.CodeAnalysis.CSharp.Syntax.ImplicitArrayCreationExpressionSyntax
+                or Microsoft.CodeAnalysis.CSharp.Syntax.StackAllocArrayCreationExpressionSyntax
+                or Microsoft.CodeAnalysis.CSharp.Syntax.ImplicitStackAllocArrayCreationExpressionSyntax,
+        });
 
     private static bool IsTrustedMetadata(IMethodSymbol method)
     {

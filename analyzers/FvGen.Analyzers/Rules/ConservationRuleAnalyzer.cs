@@ -35,25 +35,36 @@ public abstract class ConservationRuleAnalyzer : DiagnosticAnalyzer
                 start.RegisterSymbolAction(symbol => CheckDeclaration(symbol, analysis), SymbolKind.Method);
             }
 
-            start.RegisterOperationBlockAction(block =>
-            {
-                if (block.OwningSymbol is not IMethodSymbol method
-                    || !ConservationScope.IsInScope(method, analysis.Known, block.Options, block.FilterTree)
-                    || ConservationAnalysis.BodyOf(block.OperationBlocks) is not { } body)
+            // Operation trees are asked for only inside scope: out-of-scope methods cost nothing.
+            start.RegisterSymbolStartAction(
+                symbolStart =>
                 {
-                    return;
-                }
+                    if (symbolStart.Symbol is not IMethodSymbol candidate
+                        || candidate.Locations.FirstOrDefault(l => l.IsInSource)?.SourceTree is not { } tree
+                        || !ConservationScope.IsInScope(candidate, analysis.Known, symbolStart.Options, tree))
+                    {
+                        return;
+                    }
 
-                foreach (var issue in analysis.Issues(method, body).Where(i => i.RuleId == _rule.Id))
-                {
-                    block.ReportDiagnostic(Diagnostic.Create(
-                        _rule,
-                        issue.Location,
-                        issue.AdditionalLocations,
-                        issue.Properties,
-                        issue.Arguments.Cast<object>().ToArray()));
-                }
-            });
+                    symbolStart.RegisterOperationBlockAction(block =>
+                    {
+                        if (block.OwningSymbol is not IMethodSymbol method || ConservationAnalysis.BodyOf(block.OperationBlocks) is not { } body)
+                        {
+                            return;
+                        }
+
+                        foreach (var issue in analysis.Issues(method, body).Where(i => i.RuleId == _rule.Id))
+                        {
+                            block.ReportDiagnostic(Diagnostic.Create(
+                                _rule,
+                                issue.Location,
+                                issue.AdditionalLocations,
+                                issue.Properties,
+                                issue.Arguments.Cast<object>().ToArray()));
+                        }
+                    });
+                },
+                SymbolKind.Method);
         });
     }
 

@@ -203,4 +203,22 @@ public sealed class RefinementTests
         var value = Sym("k") * (forward - backward);
         Assert.Empty(Check(I, Assign("R", Cell(At("i")), value)));
     }
+
+    [Fact]
+    public void PrecomputedInverseMeasureIsDividedOut()
+    {
+        // R[i] = (F[i] - F[i+1]) * invDx[i]: Σ R[i] / invDx[i] telescopes.
+        var value = (Read("F", At("i")) - Read("F", At("i", 1))) * Read("invDx", At("i"));
+        Assert.Empty(Check(I, Assign("R", Cell(At("i")), value)));
+    }
+
+    [Fact]
+    public void StateFactorIsNotTakenForAnInverseMeasure()
+    {
+        // R[i] = -u[i] * (u[i+1] - u[i]): u is read elsewhere, so u[i] is no measure, and u[i]·u[i+1]
+        // has no counterpart. (The central form u[i] * (u[i+1] - u[i-1]) does telescope: u[i]·u[i+1].)
+        var value = -(Read("u", At("i")) * (Read("u", At("i", 1)) - Read("u", At("i"))));
+        var finding = Assert.Single(Check(I, Assign("R", Cell(At("i")), value)));
+        Assert.Equal(FindingKind.DroppedFaceTerm, finding.Kind);
+    }
 }

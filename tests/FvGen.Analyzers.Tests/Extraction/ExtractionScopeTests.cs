@@ -48,6 +48,11 @@ public sealed class ExtractionScopeTests
             "res[r[f]] += h;", "res[r[f]] += h * h;"
         },
         {
+            "a reduction loop (largest wave speed) before the update is not an update",
+            "static class K { [ConservativeUpdate] static void M(double[] u, double[] un, double cfl, double dx) { double smax = 0; for (int i = 0; i < u.Length; i++) smax = Math.Max(smax, Math.Abs(u[i])); double dt = cfl * dx / smax; for (int i = 1; i < u.Length - 1; i++) un[i] = u[i] - dt / dx * (0.5 * u[i + 1] * u[i + 1] - 0.5 * u[i] * u[i]); } }",
+            "(0.5 * u[i + 1] * u[i + 1] - 0.5 * u[i] * u[i])", "(0.5 * u[i + 1] * u[i + 1] - 0.5 * u[i] * u[i - 1])"
+        },
+        {
             "limiter through Math.Min and Math.Max in mixed order",
             "static class K { [ConservativeUpdate] static void M(double[] u, double[] r) { for (int i = 2; i < u.Length - 2; i++) { double hi = Math.Max(0, Math.Min(u[i + 1] - u[i], u[i] - u[i - 1])); double lo = Math.Max(Math.Min(u[i - 1] - u[i - 2], u[i] - u[i - 1]), 0); r[i] = -(hi - lo); } } }",
             "double lo = Math.Max(Math.Min(u[i - 1] - u[i - 2], u[i] - u[i - 1]), 0);", "double lo = Math.Max(Math.Min(u[i - 1] - u[i - 2], u[i + 1] - u[i - 1]), 0);"

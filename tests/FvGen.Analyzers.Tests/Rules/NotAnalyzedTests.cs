@@ -71,4 +71,22 @@ public sealed class NotAnalyzedTests
             }
             """,
             VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("the array `Pick(all, k)` comes from an expression the checker cannot follow (aliasing cannot be ruled out)"));
+
+    [Fact]
+    public Task FluxBehindAnInterfaceIsNotGuessedPure() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            interface IFlux { double Evaluate(double left, double right); }
+
+            static class Kernel
+            {
+                [ConservativeUpdate]
+                public static void Rate(IFlux flux, double[] u, double[] r)
+                {
+                    for (int i = 1; i < r.Length - 1; i++)
+                        r[i] = -({|#0:flux.Evaluate(u[i], u[i + 1])|} - flux.Evaluate(u[i - 1], u[i]));
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("it calls `IFlux.Evaluate(double, double)`, whose body the checker cannot see"));
 }
