@@ -229,7 +229,7 @@ internal static class BalanceChecker
 
     private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes)
     {
-        var terms = writes.SelectMany(w => MeasureWeighted(w).Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, w))).ToList();
+        var terms = FaceLoopWeighted(writes).SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
         foreach (var c in ShiftClass.Build(terms, space))
         {
             var sum = c.Sum;
@@ -524,6 +524,13 @@ internal static class BalanceChecker
     /// <summary>A source reads only the cell it writes: no face data, every subscript one of the target's.</summary>
     private static bool IsSource(ClassMember member)
     {
+        if (member.Source.Term.Factors.Any(f => f is CallExpr { CarriesBoundaryFlux: true }))
+        {
+            // A declared boundary flux is the flux through a boundary face: by declaration no other
+            // cell shares that face, so it is a source of the cell it goes to (the ledger balances it).
+            return true;
+        }
+
         var target = member.Source.Write.Subscripts.SelectMany(g => g).ToList();
         var targetKeys = new HashSet<string>(target.Select(s => s.Key), StringComparer.Ordinal);
 
@@ -551,6 +558,23 @@ internal static class BalanceChecker
     /// Multiplies out the cell measure: a divisor indexed exactly like the target
     /// (<c>/ dx[i]</c>, <c>/ vol[c]</c>), since the conserved total is Σ measure · value.
     /// </summary>
+    /// <summary>
+    /// The writes of a face loop, each with its cell measure taken out. A precomputed inverse measure
+    /// (a factor indexed like the target) counts only when every write of the loop has one from the
+    /// same array (<c>* invVol[left]</c>, <c>* invVol[right]</c>): a factor that merely happens to be
+    /// indexed like one target (the face area <c>width[i]</c> of a row of faces whose right cell is
+    /// <c>i</c>) is part of the flux, not a measure.
+    /// </summary>
+    private static List<(UpdateWrite Write, SumExpr Sum)> FaceLoopWeighted(List<UpdateWrite> writes)
+    {
+        var weighted = writes.Select(w => (Write: w, Weighted: MeasureWeighted(w))).ToList();
+        var inverseArrays = weighted.Select(x => x.Weighted.Measure is ReciprocalExpr r ? "1/" + string.Join(",", r.Denominator.Reads.Select(read => read.Array + read.Path)) : string.Empty).Distinct(StringComparer.Ordinal).ToList();
+        bool inverseConsistent = inverseArrays.Count == 1;
+        return weighted
+            .Select(x => (x.Write, x.Weighted.Measure is ReciprocalExpr && !inverseConsistent ? x.Write.Value : x.Weighted.Sum))
+            .ToList();
+    }
+
     private static (SumExpr Sum, Expr? Measure) MeasureWeighted(UpdateWrite write)
     {
         ReciprocalExpr? divisor = null;

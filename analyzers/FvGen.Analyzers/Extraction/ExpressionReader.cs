@@ -100,6 +100,13 @@ internal sealed class ExpressionReader
                     mapped = new MappedSubscript(r.Array, r.AllSubscripts.Cast<AffineSubscript>().Select(s => s.Index).ToImmutableArray());
                     continue;
                 }
+
+                if (t.Coefficient.IsOne && mapped is null && r.Path.Length == 0 && r.AllSubscripts.Count() == 1 && r.AllSubscripts.First() is MappedSubscript inner)
+                {
+                    // A map of a map (`faceLeft[colourFaces[n]]`): one composed map of the affine subscripts.
+                    mapped = new MappedSubscript(r.Array + "∘" + inner.Map, inner.Arguments);
+                    continue;
+                }
             }
 
             throw new NotModelledException($"the index `{Short(operation.Syntax)}` depends on data, not only on the loop variables and index maps", operation.Syntax);
@@ -421,15 +428,15 @@ internal sealed class ExpressionReader
             arguments.Add(Read(argument.Value));
         }
 
-        return Call(function, symmetry, invocation.Syntax, arguments);
+        return Call(function, symmetry, invocation.Syntax, arguments, Known.HasAttribute(method, Known.BoundaryFlux));
     }
 
     private SumExpr Opaque(string function, SyntaxNode syntax, params SumExpr[] arguments) =>
         Call(function, CallSymmetry.None, syntax, arguments);
 
-    private SumExpr Call(string function, CallSymmetry symmetry, SyntaxNode syntax, IReadOnlyList<SumExpr> arguments)
+    private SumExpr Call(string function, CallSymmetry symmetry, SyntaxNode syntax, IReadOnlyList<SumExpr> arguments, bool isBoundaryFlux = false)
     {
-        var call = new CallExpr(function, arguments.Select(a => a.StripOrigins()).ToImmutableArray(), symmetry);
+        var call = new CallExpr(function, arguments.Select(a => a.StripOrigins()).ToImmutableArray(), symmetry, isBoundaryFlux);
         if (arguments.All(a => a.IsInvariant))
         {
             return SumExpr.Invariant(SymPoly.Symbol(call.Render()));
