@@ -26,6 +26,9 @@ internal sealed class ExpressionReader
     /// <summary>Locals (and lambda parameters) in scope: loop variables, inlined values, array aliases.</summary>
     public Dictionary<ISymbol, Binding> Bindings { get; }
 
+    /// <summary>Loop variables that run over an index list (<c>foreach (int c in active)</c>), not a range.</summary>
+    public HashSet<string> ListVariables { get; } = new(System.StringComparer.Ordinal);
+
     public KnownSymbols Known => _method.Known;
 
     public SumExpr Read(IOperation operation)
@@ -120,6 +123,17 @@ internal sealed class ExpressionReader
             }
 
             return mapped;
+        }
+
+        foreach (var variable in ListVariables)
+        {
+            var coefficient = affine.CoefficientOf(variable);
+            if (!coefficient.IsZero && !(coefficient.IsOne && affine.Linear.Length == 1 && affine.Constant.IsZero))
+            {
+                // `q[i + 1]` for i taken from a list: the list need not hold i + 1, so a shift by one is
+                // no step of the iteration and the faces at the edges of the listed cells cannot be balanced.
+                throw new NotModelledException($"the index `{Short(operation.Syntax)}` steps away from a loop variable taken from an index list, which need not hold that neighbour", operation.Syntax);
+            }
         }
 
         return new AffineSubscript(affine);
@@ -301,9 +315,14 @@ internal sealed class ExpressionReader
                 return Opaque("." + name, member.Syntax, value);
             }
 
-            var projected = t.Factors[0] is ReadExpr r && !r.IsLoopIndex
-                ? (Expr)new ReadExpr(r.Array, r.Subscripts, r.Path + "." + name, r.Role)
-                : new CallExpr("." + name, ImmutableArray.Create(SumExpr.Factor(t.Factors[0])), CallSymmetry.None);
+            var projected = t.Factors[0] switch
+            {
+                ReadExpr r when !r.IsLoopIndex => new ReadExpr(r.Array, r.Subscripts, r.Path + "." + name, r.Role),
+
+                // A component of an antisymmetric flux is antisymmetric in the same arguments.
+                CallExpr { Symmetry: CallSymmetry.Antisymmetric } c => new CallExpr(c.Function + "." + name, c.Arguments, CallSymmetry.Antisymmetric, c.IsBoundaryFlux),
+                var other => (Expr)new CallExpr("." + name, ImmutableArray.Create(SumExpr.Factor(other)), CallSymmetry.None),
+            };
             terms.Add(new Term(t.Coefficient, new[] { projected }, t.Origins));
         }
 

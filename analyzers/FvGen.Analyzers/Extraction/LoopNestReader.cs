@@ -251,6 +251,7 @@ internal sealed class LoopNestReader
         }
 
         AddVariable(variable, 1, LoopVariableKind.Set);
+        _reader.ListVariables.Add(variable.Name);
     }
 
     private SumExpr AddVariable(ISymbol symbol, long step, LoopVariableKind kind)

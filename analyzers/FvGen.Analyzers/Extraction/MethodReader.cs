@@ -103,9 +103,10 @@ internal static class MethodReader
             case IExpressionStatementOperation expression when LoopNestReader.IsLoop(expression.Operation, method.Known):
                 AddNest(expression.Operation, outer, nests);
                 return;
-            case IForLoopOperation or IForEachLoopOperation when SwitchesAmongLoops(operation, method.Known):
-                // A loop over boundary patches that picks each patch's face loop with a `switch`: each
-                // face loop is checked on its own, for any value of the patch index (a symbol here).
+            case IForLoopOperation or IForEachLoopOperation when SwitchesAmongLoops(operation, method.Known) || RunsOverDescriptors(operation, method.Known):
+                // A loop over boundary patches (by index with a `switch` picking each patch's face loop,
+                // or over the patch descriptors themselves): each inner face loop is checked on its own,
+                // for any value of the patch (a symbol here).
                 foreach (var local in LoopLocals(operation).Concat(AssignedLocals(operation)))
                 {
                     outer[local] = new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
@@ -208,6 +209,12 @@ internal static class MethodReader
     /// <summary>True when the loop's body holds a <c>switch</c> whose sections hold loops.</summary>
     private static bool SwitchesAmongLoops(IOperation loop, KnownSymbols known) =>
         loop.Descendants().OfType<ISwitchOperation>().Any(s => s.Descendants().Any(d => LoopNestReader.IsLoop(d, known)));
+
+    /// <summary>True for a <c>foreach</c> over non-index elements (<c>BoundaryPatch</c>) whose body holds loops.</summary>
+    private static bool RunsOverDescriptors(IOperation loop, KnownSymbols known) =>
+        loop is IForEachLoopOperation { Locals.Length: > 0 } each
+        && !ExpressionReader.IsIntegral(each.Locals[0].Type)
+        && each.Body.DescendantsAndSelf().Any(d => LoopNestReader.IsLoop(d, known));
 
     private static IEnumerable<ILocalSymbol> LoopLocals(IOperation loop) => loop switch
     {
