@@ -183,7 +183,14 @@ internal static class MethodReader
 
             if (local.Type is IArrayTypeSymbol || method.Known.IsSpan(local.Type) || method.Known.IsCellField(local.Type) || method.Known.IsFaceField(local.Type))
             {
-                if (value is IArrayCreationOperation or IObjectCreationOperation || value is IInvocationOperation { TargetMethod.Name: not "AsSpan" })
+                var created = value;
+                while (created is IConversionOperation conversion)
+                {
+                    // `Span<double> flux = new double[n + 1];` converts a fresh array.
+                    created = conversion.Operand;
+                }
+
+                if (created is IArrayCreationOperation or IObjectCreationOperation || created is IInvocationOperation { TargetMethod.Name: not "AsSpan" })
                 {
                     return new ArrayBinding(local.Name, method.Known.IsFaceField(local.Type) ? DataRole.Face : DataRole.Cell);
                 }
@@ -240,7 +247,11 @@ internal static class MethodReader
     private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, MethodContext method)
     {
         var accesses = nests.Select(n => Accesses(n.Loop, n.Outer, method)).ToList();
-        for (int k = 0; k < nests.Count; k++)
+
+        // From the last loop back: arrays read by a later definition (face states feeding a flux pass)
+        // are intermediate face data too, whatever subscript that definition reads them at.
+        var readByDefinitions = new HashSet<string>(System.StringComparer.Ordinal);
+        for (int k = nests.Count - 1; k >= 0; k--)
         {
             var (written, read, _, onlyAssigned) = accesses[k];
             if (written.Count == 0 || !onlyAssigned)
@@ -249,8 +260,10 @@ internal static class MethodReader
             }
 
             var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Differenced), System.StringComparer.Ordinal);
+            readLater.UnionWith(readByDefinitions);
             if (written.All(readLater.Contains) && !written.Any(read.Contains))
             {
+                readByDefinitions.UnionWith(read);
                 bool twoSided = MapsUsed(nests[k].Loop) > 1;
                 foreach (var w in written)
                 {
