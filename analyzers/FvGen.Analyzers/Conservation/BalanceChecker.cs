@@ -166,6 +166,13 @@ internal static class BalanceChecker
                 paired.Add(a);
                 paired.Add(b);
                 yield return Mismatched(a, b, classes, space);
+                if (a.Representative.Term.BodyShapeKey != b.Representative.Term.BodyShapeKey)
+                {
+                    // Another function, component or array (a copy-pasted `.Energy` for `.Momentum`): beyond
+                    // the face seen two ways, neither term has a counterpart of its own kind.
+                    yield return Dropped(a, classes, space);
+                    yield return Dropped(b, classes, space);
+                }
             }
         }
 
