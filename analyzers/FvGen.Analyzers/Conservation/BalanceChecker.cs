@@ -236,7 +236,9 @@ internal static class BalanceChecker
 
     private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes)
     {
-        var terms = FaceLoopWeighted(writes).SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
+        var weighted = FaceLoopWeighted(writes);
+        var terms = weighted.SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
+        bool found = false;
         foreach (var c in ShiftClass.Build(terms, space))
         {
             var sum = c.Sum;
@@ -247,11 +249,32 @@ internal static class BalanceChecker
                 string detail = byCell.Count == 1
                     ? "it goes to " + byCell[0] + " and to no other cell; the other cell of the face must receive the opposite weight"
                     : "it goes to " + string.Join(" and to ", byCell) + ", which sum to " + sum + ", not 0";
+                found = true;
                 yield return OneSided(c, detail);
             }
             else if (cells.Select(x => x.Cell).Distinct().Count() == 1)
             {
+                found = true;
                 yield return SelfCancelling(c, c.Representative.Write);
+            }
+        }
+
+        if (!found && writes.Select(w => w.SubscriptKey).Distinct().Count() == 2)
+        {
+            // Face by face: the two cells of one iteration must get the same face flux with opposite
+            // signs. A flux that is itself a difference of cell values (k·(T[i] − T[i − 1])) telescopes
+            // even when given to both cells with one sign, so the sum over faces alone would miss it.
+            var oneFace = new LoopSpace(ImmutableArray<LoopVariable>.Empty);
+            foreach (var c in ShiftClass.Build(terms, oneFace))
+            {
+                if (!c.Sum.IsZero)
+                {
+                    var byCell = c.Members.GroupBy(m => m.Source.Write.SubscriptKey)
+                        .Select(g => g.First().Source.Write.RenderTarget() + " with weight " + g.Aggregate(SymPoly.Zero, (sum, m) => sum + m.Weight))
+                        .ToList();
+                    yield return OneSided(c, "within one face it goes to " + string.Join(" and to ", byCell) + ", which sum to " + c.Sum + ", not 0; the cell in front must receive what the cell behind gives");
+                    yield break;
+                }
             }
         }
     }
