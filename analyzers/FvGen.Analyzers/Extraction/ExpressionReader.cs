@@ -367,6 +367,7 @@ internal sealed class ExpressionReader
     /// </summary>
     private SumExpr ReadUserOperator(IBinaryOperation binary, IMethodSymbol op)
     {
+        RequireComponentWise(op, binary.Syntax);
         bool leftScalar = IsScalar(binary.LeftOperand.Type);
         bool rightScalar = IsScalar(binary.RightOperand.Type);
         switch (binary.OperatorKind)
@@ -381,6 +382,18 @@ internal sealed class ExpressionReader
                 return Read(binary.LeftOperand) * Reciprocal(Read(binary.RightOperand));
             default:
                 return Opaque(op.ContainingType.Name + "." + op.Name, binary.Syntax, Read(binary.LeftOperand), Read(binary.RightOperand));
+        }
+    }
+
+    /// <summary>A user-defined operator is read as arithmetic only when it is component-wise (<see cref="ComponentWiseOperators"/>).</summary>
+    public static void RequireComponentWise(IMethodSymbol op, SyntaxNode where)
+    {
+        if (op.MethodKind == MethodKind.UserDefinedOperator && op.Name is "op_Addition" or "op_Subtraction" or "op_Multiply" or "op_Division"
+            && !ComponentWiseOperators.IsComponentWise(op))
+        {
+            throw new NotModelledException(
+                $"the operator `{op.ToDisplayString(SymbolDisplayFormat.CSharpShortErrorMessageFormat)}` is not visibly component-wise (each field of the result the same field of the operands, combined by that operator)",
+                where);
         }
     }
 

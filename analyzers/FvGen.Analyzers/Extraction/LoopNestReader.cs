@@ -350,12 +350,23 @@ internal sealed class LoopNestReader
                 return;
             case ICompoundAssignmentOperation { Target: ILocalReferenceOperation { Local.IsRef: false } local } compound:
             {
+                if (compound.OperatorMethod is { } localOperator)
+                {
+                    ExpressionReader.RequireComponentWise(localOperator, compound.Syntax);
+                }
+
                 var current = _reader.Read(local);
                 _reader.Bindings[local.Local] = new ValueBinding(Combine(current, compound.OperatorKind, _reader.Read(compound.Value), compound.Syntax));
                 return;
             }
 
             case ICompoundAssignmentOperation compound when _reader.IsElementLike(compound.Target):
+                if (compound.OperatorMethod is { } userOperator)
+                {
+                    // `residual[left] -= flux` on a state struct: its operator must be the arithmetic it looks like.
+                    ExpressionReader.RequireComponentWise(userOperator, compound.Syntax);
+                }
+
                 switch (compound.OperatorKind)
                 {
                     case BinaryOperatorKind.Add:
