@@ -86,6 +86,15 @@ internal static class BalanceChecker
 
             if (sum.IsZero)
             {
+                if (assignment && !oldTotalClaimed && !sourcePart.IsZero && ConstantPart(sourcePart).IsZero
+                    && ConstantPart(TargetWeight(c)).IsOne && IsOldStateClass(c, measures) && Positions(c) > 1)
+                {
+                    // The old value carried at the cell (weight 1) is matched by a flux member, and what
+                    // the source reading took away leaves nothing to carry the old total: a slip such as
+                    // `- cx * here - u[i - 1]` for `- cx * (here - u[i - 1])`.
+                    yield return OldTotal(c);
+                }
+
                 continue;
             }
 
@@ -218,6 +227,10 @@ internal static class BalanceChecker
         var localWeight = local.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
         return SymPoly.Of(localWeight.Terms.Where(t => !fluxMonomials.Contains(t.Key)));
     }
+
+    private static SymPoly TargetWeight(ShiftClass c) => c.Members.Where(IsSource).Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
+
+    private static SymPoly ConstantPart(SymPoly p) => SymPoly.Of(p.Terms.Where(t => t.Key.IsOne));
 
     private static int Positions(ShiftClass c) => c.Members.Select(m => ShiftKey(m.Shift)).Distinct().Count();
 
