@@ -175,10 +175,12 @@ internal static class BalanceChecker
                 paired.Add(a);
                 paired.Add(b);
                 yield return Mismatched(a, b, classes, space);
-                if (a.Representative.Term.BodyShapeKey != b.Representative.Term.BodyShapeKey)
+                if (a.Representative.Term.BodyShapeKey != b.Representative.Term.BodyShapeKey
+                    || !(HasCall(a.Representative.Term) && HasCall(b.Representative.Term)))
                 {
-                    // Another function, component or array (a copy-pasted `.Energy` for `.Momentum`): beyond
-                    // the face seen two ways, neither term has a counterpart of its own kind.
+                    // Another function, component or array (a copy-pasted `.Energy` for `.Momentum`), or
+                    // products of arrays with no flux call (`area[i] * flux[i + 1]` for `area[i + 1] * …`):
+                    // beyond the face seen two ways, neither term has a counterpart of its own kind.
                     yield return Dropped(a, classes, space);
                     yield return Dropped(b, classes, space);
                 }
@@ -227,6 +229,8 @@ internal static class BalanceChecker
         var localWeight = local.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
         return SymPoly.Of(localWeight.Terms.Where(t => !fluxMonomials.Contains(t.Key)));
     }
+
+    private static bool HasCall(Term t) => t.Factors.Any(f => f is CallExpr);
 
     private static SymPoly TargetWeight(ShiftClass c) => c.Members.Where(IsSource).Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
 
