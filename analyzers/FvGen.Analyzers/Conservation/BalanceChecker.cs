@@ -169,7 +169,8 @@ internal static class BalanceChecker
 
             var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && Similar(a, x)
                 && ((a.Sum + x.Sum).IsZero || (SameFunction(a, x) && (a.Sum - x.Sum).IsZero))
-                && LeadingOffset(a.Representative) != LeadingOffset(x.Representative));
+                && (LeadingOffset(a.Representative) != LeadingOffset(x.Representative)
+                    || (SameFunction(a, x) && (a.Sum + x.Sum).IsZero)));
             if (b is not null)
             {
                 paired.Add(a);
