@@ -169,9 +169,9 @@ public sealed partial class IndependentCorpusCompilesTests
             or "FvGen.ConservativeUpdate" or "FvGen.ConservativeUpdateAttribute"
             or "global::FvGen.ConservativeUpdate" or "global::FvGen.ConservativeUpdateAttribute";
 
-    private static string FullPath(string relativePath) => Path.Combine(CorpusRoot, relativePath);
+    internal static string FullPath(string relativePath) => Path.Combine(CorpusRoot, relativePath);
 
-    private static IEnumerable<string> AllCorpusFiles()
+    internal static IEnumerable<string> AllCorpusFiles()
     {
         if (!Directory.Exists(CorpusRoot))
         {
@@ -182,7 +182,7 @@ public sealed partial class IndependentCorpusCompilesTests
     }
 
     /// <summary>The two header lines of a corpus file: <c>// expect: …</c> and <c>// why: …</c>.</summary>
-    private sealed record CorpusHeader(ImmutableArray<string> RuleIds, bool ExpectsNone, string? Error)
+    internal sealed record CorpusHeader(ImmutableArray<string> RuleIds, bool ExpectsNone, string? Error)
     {
         public static CorpusHeader Parse(string relativePath, string text)
         {
@@ -227,7 +227,7 @@ public sealed partial class IndependentCorpusCompilesTests
     }
 
     /// <summary>A corpus path split into family/kernel and the optional kebab-case mutation.</summary>
-    private sealed record CorpusName(string RelativePath, string Kernel, string? Mutation, string? Error)
+    internal sealed record CorpusName(string RelativePath, string Kernel, string? Mutation, string? Error)
     {
         public static CorpusName Parse(string relativePath)
         {

@@ -86,6 +86,15 @@ internal static class BalanceChecker
 
             if (sum.IsZero)
             {
+                if (assignment && !oldTotalClaimed && !sourcePart.IsZero && ConstantPart(sourcePart).IsZero
+                    && ConstantPart(TargetWeight(c)).IsOne && IsOldStateClass(c, measures) && Positions(c) > 1)
+                {
+                    // The old value carried at the cell (weight 1) is matched by a flux member, and what
+                    // the source reading took away leaves nothing to carry the old total: a slip such as
+                    // `- cx * here - u[i - 1]` for `- cx * (here - u[i - 1])`.
+                    yield return OldTotal(c);
+                }
+
                 continue;
             }
 
@@ -160,12 +169,22 @@ internal static class BalanceChecker
 
             var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && Similar(a, x)
                 && ((a.Sum + x.Sum).IsZero || (SameFunction(a, x) && (a.Sum - x.Sum).IsZero))
-                && LeadingOffset(a.Representative) != LeadingOffset(x.Representative));
+                && (LeadingOffset(a.Representative) != LeadingOffset(x.Representative)
+                    || (SameFunction(a, x) && (a.Sum + x.Sum).IsZero)));
             if (b is not null)
             {
                 paired.Add(a);
                 paired.Add(b);
                 yield return Mismatched(a, b, classes, space);
+                if (a.Representative.Term.BodyShapeKey != b.Representative.Term.BodyShapeKey
+                    || !(HasCall(a.Representative.Term) && HasCall(b.Representative.Term)))
+                {
+                    // Another function, component or array (a copy-pasted `.Energy` for `.Momentum`), or
+                    // products of arrays with no flux call (`area[i] * flux[i + 1]` for `area[i + 1] * …`):
+                    // beyond the face seen two ways, neither term has a counterpart of its own kind.
+                    yield return Dropped(a, classes, space);
+                    yield return Dropped(b, classes, space);
+                }
             }
         }
 
@@ -212,6 +231,12 @@ internal static class BalanceChecker
         return SymPoly.Of(localWeight.Terms.Where(t => !fluxMonomials.Contains(t.Key)));
     }
 
+    private static bool HasCall(Term t) => t.Factors.Any(f => f is CallExpr);
+
+    private static SymPoly TargetWeight(ShiftClass c) => c.Members.Where(IsSource).Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
+
+    private static SymPoly ConstantPart(SymPoly p) => SymPoly.Of(p.Terms.Where(t => t.Key.IsOne));
+
     private static int Positions(ShiftClass c) => c.Members.Select(m => ShiftKey(m.Shift)).Distinct().Count();
 
     /// <summary>The array of a single-read class is the state when the write also reads it inside a call or a product.</summary>
@@ -229,7 +254,9 @@ internal static class BalanceChecker
 
     private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes)
     {
-        var terms = writes.SelectMany(w => MeasureWeighted(w).Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, w))).ToList();
+        var weighted = FaceLoopWeighted(writes);
+        var terms = weighted.SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
+        bool found = false;
         foreach (var c in ShiftClass.Build(terms, space))
         {
             var sum = c.Sum;
@@ -240,11 +267,32 @@ internal static class BalanceChecker
                 string detail = byCell.Count == 1
                     ? "it goes to " + byCell[0] + " and to no other cell; the other cell of the face must receive the opposite weight"
                     : "it goes to " + string.Join(" and to ", byCell) + ", which sum to " + sum + ", not 0";
+                found = true;
                 yield return OneSided(c, detail);
             }
             else if (cells.Select(x => x.Cell).Distinct().Count() == 1)
             {
+                found = true;
                 yield return SelfCancelling(c, c.Representative.Write);
+            }
+        }
+
+        if (!found && writes.Select(w => w.SubscriptKey).Distinct().Count() == 2)
+        {
+            // Face by face: the two cells of one iteration must get the same face flux with opposite
+            // signs. A flux that is itself a difference of cell values (k·(T[i] − T[i − 1])) telescopes
+            // even when given to both cells with one sign, so the sum over faces alone would miss it.
+            var oneFace = new LoopSpace(ImmutableArray<LoopVariable>.Empty);
+            foreach (var c in ShiftClass.Build(terms, oneFace))
+            {
+                if (!c.Sum.IsZero)
+                {
+                    var byCell = c.Members.GroupBy(m => m.Source.Write.SubscriptKey)
+                        .Select(g => g.First().Source.Write.RenderTarget() + " with weight " + g.Aggregate(SymPoly.Zero, (sum, m) => sum + m.Weight))
+                        .ToList();
+                    yield return OneSided(c, "within one face it goes to " + string.Join(" and to ", byCell) + ", which sum to " + c.Sum + ", not 0; the cell in front must receive what the cell behind gives");
+                    yield break;
+                }
             }
         }
     }
@@ -524,6 +572,13 @@ internal static class BalanceChecker
     /// <summary>A source reads only the cell it writes: no face data, every subscript one of the target's.</summary>
     private static bool IsSource(ClassMember member)
     {
+        if (member.Source.Term.Factors.Any(f => f is CallExpr { CarriesBoundaryFlux: true }))
+        {
+            // A declared boundary flux is the flux through a boundary face: by declaration no other
+            // cell shares that face, so it is a source of the cell it goes to (the ledger balances it).
+            return true;
+        }
+
         var target = member.Source.Write.Subscripts.SelectMany(g => g).ToList();
         var targetKeys = new HashSet<string>(target.Select(s => s.Key), StringComparer.Ordinal);
 
@@ -551,6 +606,23 @@ internal static class BalanceChecker
     /// Multiplies out the cell measure: a divisor indexed exactly like the target
     /// (<c>/ dx[i]</c>, <c>/ vol[c]</c>), since the conserved total is Σ measure · value.
     /// </summary>
+    /// <summary>
+    /// The writes of a face loop, each with its cell measure taken out. A precomputed inverse measure
+    /// (a factor indexed like the target) counts only when every write of the loop has one from the
+    /// same array (<c>* invVol[left]</c>, <c>* invVol[right]</c>): a factor that merely happens to be
+    /// indexed like one target (the face area <c>width[i]</c> of a row of faces whose right cell is
+    /// <c>i</c>) is part of the flux, not a measure.
+    /// </summary>
+    private static List<(UpdateWrite Write, SumExpr Sum)> FaceLoopWeighted(List<UpdateWrite> writes)
+    {
+        var weighted = writes.Select(w => (Write: w, Weighted: MeasureWeighted(w))).ToList();
+        var inverseArrays = weighted.Select(x => x.Weighted.Measure is ReciprocalExpr r ? "1/" + string.Join(",", r.Denominator.Reads.Select(read => read.Array + read.Path)) : string.Empty).Distinct(StringComparer.Ordinal).ToList();
+        bool inverseConsistent = inverseArrays.Count == 1;
+        return weighted
+            .Select(x => (x.Write, x.Weighted.Measure is ReciprocalExpr && !inverseConsistent ? x.Write.Value : x.Weighted.Sum))
+            .ToList();
+    }
+
     private static (SumExpr Sum, Expr? Measure) MeasureWeighted(UpdateWrite write)
     {
         ReciprocalExpr? divisor = null;

@@ -11,9 +11,10 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class CallExpr : Expr
 {
-    public CallExpr(string function, ImmutableArray<SumExpr> arguments, CallSymmetry symmetry)
+    public CallExpr(string function, ImmutableArray<SumExpr> arguments, CallSymmetry symmetry, bool isBoundaryFlux = false)
     {
         Function = function;
+        IsBoundaryFlux = isBoundaryFlux;
 
         // Symmetric calls keep their arguments in one canonical order, so equal calls have equal keys.
         Arguments = symmetry == CallSymmetry.Symmetric
@@ -29,6 +30,14 @@ internal sealed class CallExpr : Expr
     public ImmutableArray<SumExpr> Arguments { get; }
 
     public CallSymmetry Symmetry { get; }
+
+    /// <summary>A call of a function declared a boundary flux: the flux through a boundary face, with no counterpart cell.</summary>
+    public bool IsBoundaryFlux { get; }
+
+    /// <summary>True for a boundary-flux call, or a component of one (<c>.Mass(Drain(…))</c>).</summary>
+    public bool CarriesBoundaryFlux =>
+        IsBoundaryFlux || (Function.StartsWith(".", System.StringComparison.Ordinal) && Arguments.Length == 1
+            && Arguments[0].Terms.Length == 1 && Arguments[0].Terms[0].Factors.Any(f => f is CallExpr { CarriesBoundaryFlux: true }));
 
     public override string Key { get; }
 
@@ -54,7 +63,7 @@ internal sealed class CallExpr : Expr
     public override IEnumerable<ReadExpr> Reads => Arguments.SelectMany(a => a.Reads);
 
     public override Expr Shift(IReadOnlyDictionary<string, long> shift) =>
-        new CallExpr(Function, Arguments.Select(a => a.Shift(shift)).ToImmutableArray(), Symmetry);
+        new CallExpr(Function, Arguments.Select(a => a.Shift(shift)).ToImmutableArray(), Symmetry, IsBoundaryFlux);
 
     public override string Render()
     {

@@ -26,6 +26,9 @@ internal sealed class ExpressionReader
     /// <summary>Locals (and lambda parameters) in scope: loop variables, inlined values, array aliases.</summary>
     public Dictionary<ISymbol, Binding> Bindings { get; }
 
+    /// <summary>Loop variables that run over an index list (<c>foreach (int c in active)</c>), not a range.</summary>
+    public HashSet<string> ListVariables { get; } = new(System.StringComparer.Ordinal);
+
     public KnownSymbols Known => _method.Known;
 
     public SumExpr Read(IOperation operation)
@@ -100,6 +103,13 @@ internal sealed class ExpressionReader
                     mapped = new MappedSubscript(r.Array, r.AllSubscripts.Cast<AffineSubscript>().Select(s => s.Index).ToImmutableArray());
                     continue;
                 }
+
+                if (t.Coefficient.IsOne && mapped is null && r.Path.Length == 0 && r.AllSubscripts.Count() == 1 && r.AllSubscripts.First() is MappedSubscript inner)
+                {
+                    // A map of a map (`faceLeft[colourFaces[n]]`): one composed map of the affine subscripts.
+                    mapped = new MappedSubscript(r.Array + "∘" + inner.Map, inner.Arguments);
+                    continue;
+                }
             }
 
             throw new NotModelledException($"the index `{Short(operation.Syntax)}` depends on data, not only on the loop variables and index maps", operation.Syntax);
@@ -113,6 +123,17 @@ internal sealed class ExpressionReader
             }
 
             return mapped;
+        }
+
+        foreach (var variable in ListVariables)
+        {
+            var coefficient = affine.CoefficientOf(variable);
+            if (!coefficient.IsZero && !(coefficient.IsOne && affine.Linear.Length == 1 && affine.Constant.IsZero))
+            {
+                // `q[i + 1]` for i taken from a list: the list need not hold i + 1, so a shift by one is
+                // no step of the iteration and the faces at the edges of the listed cells cannot be balanced.
+                throw new NotModelledException($"the index `{Short(operation.Syntax)}` steps away from a loop variable taken from an index list, which need not hold that neighbour", operation.Syntax);
+            }
         }
 
         return new AffineSubscript(affine);
@@ -294,9 +315,14 @@ internal sealed class ExpressionReader
                 return Opaque("." + name, member.Syntax, value);
             }
 
-            var projected = t.Factors[0] is ReadExpr r && !r.IsLoopIndex
-                ? (Expr)new ReadExpr(r.Array, r.Subscripts, r.Path + "." + name, r.Role)
-                : new CallExpr("." + name, ImmutableArray.Create(SumExpr.Factor(t.Factors[0])), CallSymmetry.None);
+            var projected = t.Factors[0] switch
+            {
+                ReadExpr r when !r.IsLoopIndex => new ReadExpr(r.Array, r.Subscripts, r.Path + "." + name, r.Role),
+
+                // A component of an antisymmetric flux is antisymmetric in the same arguments.
+                CallExpr { Symmetry: CallSymmetry.Antisymmetric } c => new CallExpr(c.Function + "." + name, c.Arguments, CallSymmetry.Antisymmetric, c.IsBoundaryFlux),
+                var other => (Expr)new CallExpr("." + name, ImmutableArray.Create(SumExpr.Factor(other)), CallSymmetry.None),
+            };
             terms.Add(new Term(t.Coefficient, new[] { projected }, t.Origins));
         }
 
@@ -341,6 +367,7 @@ internal sealed class ExpressionReader
     /// </summary>
     private SumExpr ReadUserOperator(IBinaryOperation binary, IMethodSymbol op)
     {
+        RequireComponentWise(op, binary.Syntax);
         bool leftScalar = IsScalar(binary.LeftOperand.Type);
         bool rightScalar = IsScalar(binary.RightOperand.Type);
         switch (binary.OperatorKind)
@@ -355,6 +382,18 @@ internal sealed class ExpressionReader
                 return Read(binary.LeftOperand) * Reciprocal(Read(binary.RightOperand));
             default:
                 return Opaque(op.ContainingType.Name + "." + op.Name, binary.Syntax, Read(binary.LeftOperand), Read(binary.RightOperand));
+        }
+    }
+
+    /// <summary>A user-defined operator is read as arithmetic only when it is component-wise (<see cref="ComponentWiseOperators"/>).</summary>
+    public static void RequireComponentWise(IMethodSymbol op, SyntaxNode where)
+    {
+        if (op.MethodKind == MethodKind.UserDefinedOperator && op.Name is "op_Addition" or "op_Subtraction" or "op_Multiply" or "op_Division"
+            && !ComponentWiseOperators.IsComponentWise(op))
+        {
+            throw new NotModelledException(
+                $"the operator `{op.ToDisplayString(SymbolDisplayFormat.CSharpShortErrorMessageFormat)}` is not visibly component-wise (each field of the result the same field of the operands, combined by that operator)",
+                where);
         }
     }
 
@@ -421,15 +460,15 @@ internal sealed class ExpressionReader
             arguments.Add(Read(argument.Value));
         }
 
-        return Call(function, symmetry, invocation.Syntax, arguments);
+        return Call(function, symmetry, invocation.Syntax, arguments, Known.HasAttribute(method, Known.BoundaryFlux));
     }
 
     private SumExpr Opaque(string function, SyntaxNode syntax, params SumExpr[] arguments) =>
         Call(function, CallSymmetry.None, syntax, arguments);
 
-    private SumExpr Call(string function, CallSymmetry symmetry, SyntaxNode syntax, IReadOnlyList<SumExpr> arguments)
+    private SumExpr Call(string function, CallSymmetry symmetry, SyntaxNode syntax, IReadOnlyList<SumExpr> arguments, bool isBoundaryFlux = false)
     {
-        var call = new CallExpr(function, arguments.Select(a => a.StripOrigins()).ToImmutableArray(), symmetry);
+        var call = new CallExpr(function, arguments.Select(a => a.StripOrigins()).ToImmutableArray(), symmetry, isBoundaryFlux);
         if (arguments.All(a => a.IsInvariant))
         {
             return SumExpr.Invariant(SymPoly.Symbol(call.Render()));

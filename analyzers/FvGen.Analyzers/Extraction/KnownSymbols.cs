@@ -13,6 +13,7 @@ internal sealed class KnownSymbols
         ConservativeUpdate = conservativeUpdate;
         NumericalFlux = compilation.GetTypeByMetadataName("FvGen.NumericalFluxAttribute");
         FaceData = compilation.GetTypeByMetadataName("FvGen.FaceDataAttribute");
+        BoundaryFlux = compilation.GetTypeByMetadataName("FvGen.BoundaryFluxAttribute");
         FaceField = compilation.GetTypeByMetadataName("FvGen.Fields.FaceField`1");
         CellField = compilation.GetTypeByMetadataName("FvGen.Fields.CellField`1");
         UnstructuredMesh = compilation.GetTypeByMetadataName("FvGen.Meshes.Unstructured.UnstructuredMesh");
@@ -29,6 +30,8 @@ internal sealed class KnownSymbols
     public INamedTypeSymbol? NumericalFlux { get; }
 
     public INamedTypeSymbol? FaceData { get; }
+
+    public INamedTypeSymbol? BoundaryFlux { get; }
 
     public INamedTypeSymbol? FaceField { get; }
 

@@ -52,6 +52,16 @@ internal sealed class LoopNestReader
             throw new NotModelledException($"loops are nested deeper than {MaxDepth} levels", loop.Syntax);
         }
 
+        if (_depth > 1)
+        {
+            // A local of the outer level accumulated by an inner loop (a cell summing its faces from a
+            // face list) is a reduction over that loop, not one value per iteration.
+            foreach (var carried in AssignedOuterLocals(loop))
+            {
+                _reader.Bindings[carried] = new UnknownBinding($"the local `{carried.Name}` is accumulated over the inner loop (a reduction the checker does not model)");
+            }
+        }
+
         switch (loop)
         {
             case IForLoopOperation f:
@@ -241,6 +251,7 @@ internal sealed class LoopNestReader
         }
 
         AddVariable(variable, 1, LoopVariableKind.Set);
+        _reader.ListVariables.Add(variable.Name);
     }
 
     private SumExpr AddVariable(ISymbol symbol, long step, LoopVariableKind kind)
@@ -332,14 +343,30 @@ internal sealed class LoopNestReader
             case ISimpleAssignmentOperation assignment when _reader.IsElementLike(assignment.Target):
                 AddWrite(assignment.Target, _reader.Read(assignment.Value), isAssignment: true, assignment.Syntax);
                 return;
+            case ICompoundAssignmentOperation { Target: ILocalReferenceOperation { Local.IsRef: false } local }
+                when _reader.Bindings.TryGetValue(local.Local, out var carried) && carried is UnknownBinding:
+                // A reduction carried across iterations (a boundary-flux tally): it stays unknown, and a
+                // write that reads it is reported with the reason it is unknown.
+                return;
             case ICompoundAssignmentOperation { Target: ILocalReferenceOperation { Local.IsRef: false } local } compound:
             {
+                if (compound.OperatorMethod is { } localOperator)
+                {
+                    ExpressionReader.RequireComponentWise(localOperator, compound.Syntax);
+                }
+
                 var current = _reader.Read(local);
                 _reader.Bindings[local.Local] = new ValueBinding(Combine(current, compound.OperatorKind, _reader.Read(compound.Value), compound.Syntax));
                 return;
             }
 
             case ICompoundAssignmentOperation compound when _reader.IsElementLike(compound.Target):
+                if (compound.OperatorMethod is { } userOperator)
+                {
+                    // `residual[left] -= flux` on a state struct: its operator must be the arithmetic it looks like.
+                    ExpressionReader.RequireComponentWise(userOperator, compound.Syntax);
+                }
+
                 switch (compound.OperatorKind)
                 {
                     case BinaryOperatorKind.Add:

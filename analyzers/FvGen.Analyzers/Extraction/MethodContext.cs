@@ -9,11 +9,25 @@ namespace FvGen.Analyzers.Extraction;
 internal sealed class MethodContext
 {
     public MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType)
+        : this(known, purity, containingType, new OriginTable(), new List<ConservationIssue>(), new HashSet<IMethodSymbol>(SymbolEqualityComparer.Default))
+    {
+    }
+
+    private MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType, OriginTable origins, List<ConservationIssue> issues, HashSet<IMethodSymbol> impureReported)
     {
         Known = known;
         Purity = purity;
         ContainingType = containingType;
+        Origins = origins;
+        Issues = issues;
+        _impureReported = impureReported;
     }
+
+    /// <summary>
+    /// The context of a local function of this method: the same symbols, origins and issue list, but
+    /// face arrays of its own (its loops fill and read its own buffers).
+    /// </summary>
+    public MethodContext ForLocalFunction() => new(Known, Purity, ContainingType, Origins, Issues, _impureReported);
 
     public KnownSymbols Known { get; }
 
@@ -21,7 +35,7 @@ internal sealed class MethodContext
 
     public INamedTypeSymbol? ContainingType { get; }
 
-    public OriginTable Origins { get; } = new();
+    public OriginTable Origins { get; }
 
     /// <summary>Arrays filled by an earlier loop of the method (definitions): face data for later loops.</summary>
     public HashSet<string> FaceArrays { get; } = new(System.StringComparer.Ordinal);
@@ -29,9 +43,9 @@ internal sealed class MethodContext
     /// <summary>Those of <see cref="FaceArrays"/> whose definition read cells through two index maps.</summary>
     public HashSet<string> InteriorFaceArrays { get; } = new(System.StringComparer.Ordinal);
 
-    public List<ConservationIssue> Issues { get; } = new();
+    public List<ConservationIssue> Issues { get; }
 
-    private readonly HashSet<IMethodSymbol> _impureReported = new(SymbolEqualityComparer.Default);
+    private readonly HashSet<IMethodSymbol> _impureReported;
 
     public void ReportImpureCall(IInvocationOperation invocation, IMethodSymbol method, Purity purity)
     {

@@ -16,9 +16,31 @@ internal static class MethodReader
 {
     public static IReadOnlyList<ConservationIssue> Analyze(IOperation body, MethodContext method)
     {
+        var pending = new Queue<(IOperation Body, MethodContext Context)>();
+        pending.Enqueue((body, method));
+        while (pending.Count > 0)
+        {
+            var (next, context) = pending.Dequeue();
+            var localFunctions = new List<ILocalFunctionOperation>();
+            AnalyzeBody(next, context, localFunctions);
+            foreach (var localFunction in localFunctions)
+            {
+                if (localFunction.Body is { } localBody)
+                {
+                    // Its own face arrays and bindings; the issues go to the same list.
+                    pending.Enqueue((localBody, method.ForLocalFunction()));
+                }
+            }
+        }
+
+        return method.Issues;
+    }
+
+    private static void AnalyzeBody(IOperation body, MethodContext method, List<ILocalFunctionOperation> localFunctions)
+    {
         var nests = new List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)>();
         var outer = new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default);
-        Walk(body, outer, nests, method);
+        Walk(body, outer, nests, method, localFunctions);
 
         MarkDefinitions(nests, method);
         foreach (var (loop, bindings) in nests)
@@ -47,23 +69,21 @@ internal static class MethodReader
                 method.ReportNotAnalyzed(e.Message, loop.Syntax);
             }
         }
-
-        return method.Issues;
     }
 
-    private static void Walk(IOperation? operation, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests, MethodContext method)
+    private static void Walk(IOperation? operation, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests, MethodContext method, List<ILocalFunctionOperation> localFunctions)
     {
         switch (operation)
         {
             case null:
                 return;
             case IMethodBodyOperation methodBody:
-                Walk(methodBody.BlockBody ?? methodBody.ExpressionBody, outer, nests, method);
+                Walk(methodBody.BlockBody ?? methodBody.ExpressionBody, outer, nests, method, localFunctions);
                 return;
             case IBlockOperation block:
                 foreach (var s in block.Operations)
                 {
-                    Walk(s, outer, nests, method);
+                    Walk(s, outer, nests, method, localFunctions);
                 }
 
                 return;
@@ -83,8 +103,29 @@ internal static class MethodReader
             case IExpressionStatementOperation expression when LoopNestReader.IsLoop(expression.Operation, method.Known):
                 AddNest(expression.Operation, outer, nests);
                 return;
+            case IForLoopOperation or IForEachLoopOperation when SwitchesAmongLoops(operation, method.Known) || RunsOverDescriptors(operation, method.Known):
+                // A loop over boundary patches (by index with a `switch` picking each patch's face loop,
+                // or over the patch descriptors themselves): each inner face loop is checked on its own,
+                // for any value of the patch (a symbol here).
+                foreach (var local in LoopLocals(operation).Concat(AssignedLocals(operation)))
+                {
+                    outer[local] = new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
+                }
+
+                Walk(operation is IForLoopOperation f ? f.Body : ((IForEachLoopOperation)operation).Body, outer, nests, method, localFunctions);
+                return;
             case IForLoopOperation or IForEachLoopOperation:
                 AddNest(operation, outer, nests);
+                return;
+            case ISwitchOperation switchOperation:
+                foreach (var section in switchOperation.Cases)
+                {
+                    foreach (var statement in section.Body)
+                    {
+                        Walk(statement, outer, nests, method, localFunctions);
+                    }
+                }
+
                 return;
             case IWhileLoopOperation loop:
                 // A time or iteration loop around the kernels: its body is read like the method's.
@@ -95,17 +136,22 @@ internal static class MethodReader
                         : new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
                 }
 
-                Walk(loop.Body, outer, nests, method);
+                Walk(loop.Body, outer, nests, method, localFunctions);
                 return;
             case IConditionalOperation conditional:
-                Walk(conditional.WhenTrue, outer, nests, method);
-                Walk(conditional.WhenFalse, outer, nests, method);
+                Walk(conditional.WhenTrue, outer, nests, method, localFunctions);
+                Walk(conditional.WhenFalse, outer, nests, method, localFunctions);
                 return;
             case IUsingOperation usingOperation:
-                Walk(usingOperation.Body, outer, nests, method);
+                Walk(usingOperation.Body, outer, nests, method, localFunctions);
                 return;
             case ITryOperation tryOperation:
-                Walk(tryOperation.Body, outer, nests, method);
+                Walk(tryOperation.Body, outer, nests, method, localFunctions);
+                return;
+            case ILocalFunctionOperation localFunction:
+                // Loops inside a local function (the generator puts its face loops in one) are checked
+                // like the method's own; its parameters are unbound, like a method's.
+                localFunctions.Add(localFunction);
                 return;
         }
     }
@@ -129,9 +175,22 @@ internal static class MethodReader
         var reader = new ExpressionReader(method, new Dictionary<ISymbol, Binding>(outer, SymbolEqualityComparer.Default));
         try
         {
+            if (IsIndexedTable(local.Type))
+            {
+                // A list of descriptors read by index (the mesh's boundary patches): data, not a value.
+                return new ArrayBinding(local.Name, DataRole.Cell);
+            }
+
             if (local.Type is IArrayTypeSymbol || method.Known.IsSpan(local.Type) || method.Known.IsCellField(local.Type) || method.Known.IsFaceField(local.Type))
             {
-                if (value is IArrayCreationOperation or IObjectCreationOperation || value is IInvocationOperation { TargetMethod.Name: not "AsSpan" })
+                var created = value;
+                while (created is IConversionOperation conversion)
+                {
+                    // `Span<double> flux = new double[n + 1];` converts a fresh array.
+                    created = conversion.Operand;
+                }
+
+                if (created is IArrayCreationOperation or IObjectCreationOperation || created is IInvocationOperation { TargetMethod.Name: not "AsSpan" })
                 {
                     return new ArrayBinding(local.Name, method.Known.IsFaceField(local.Type) ? DataRole.Face : DataRole.Cell);
                 }
@@ -154,6 +213,29 @@ internal static class MethodReader
         }
     }
 
+    /// <summary>True when the loop's body holds a <c>switch</c> whose sections hold loops.</summary>
+    private static bool SwitchesAmongLoops(IOperation loop, KnownSymbols known) =>
+        loop.Descendants().OfType<ISwitchOperation>().Any(s => s.Descendants().Any(d => LoopNestReader.IsLoop(d, known)));
+
+    /// <summary>True for a <c>foreach</c> over non-index elements (<c>BoundaryPatch</c>) whose body holds loops.</summary>
+    private static bool RunsOverDescriptors(IOperation loop, KnownSymbols known) =>
+        loop is IForEachLoopOperation { Locals.Length: > 0 } each
+        && !ExpressionReader.IsIntegral(each.Locals[0].Type)
+        && each.Body.DescendantsAndSelf().Any(d => LoopNestReader.IsLoop(d, known));
+
+    private static IEnumerable<ILocalSymbol> LoopLocals(IOperation loop) => loop switch
+    {
+        IForLoopOperation f => f.Locals,
+        IForEachLoopOperation fe => fe.Locals,
+        _ => Enumerable.Empty<ILocalSymbol>(),
+    };
+
+    /// <summary>A read-only list type with an integer indexer (<c>IReadOnlyList&lt;BoundaryPatch&gt;</c>), not an array or span.</summary>
+    private static bool IsIndexedTable(ITypeSymbol type) =>
+        type is INamedTypeSymbol { TypeKind: TypeKind.Interface or TypeKind.Class } named
+        && named.OriginalDefinition.ToDisplayString() is "System.Collections.Generic.IReadOnlyList<T>" or "System.Collections.Generic.IList<T>" or "System.Collections.Generic.List<T>"
+            or "System.Collections.ObjectModel.ReadOnlyCollection<T>";
+
     /// <summary>
     /// A loop is a definition (it fills face data) when every array it writes is assigned, not
     /// incremented, and a later loop of the method reads it at a subscript that loop does not write
@@ -165,7 +247,11 @@ internal static class MethodReader
     private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, MethodContext method)
     {
         var accesses = nests.Select(n => Accesses(n.Loop, n.Outer, method)).ToList();
-        for (int k = 0; k < nests.Count; k++)
+
+        // From the last loop back: arrays read by a later definition (face states feeding a flux pass)
+        // are intermediate face data too, whatever subscript that definition reads them at.
+        var readByDefinitions = new HashSet<string>(System.StringComparer.Ordinal);
+        for (int k = nests.Count - 1; k >= 0; k--)
         {
             var (written, read, _, onlyAssigned) = accesses[k];
             if (written.Count == 0 || !onlyAssigned)
@@ -174,8 +260,10 @@ internal static class MethodReader
             }
 
             var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Differenced), System.StringComparer.Ordinal);
+            readLater.UnionWith(readByDefinitions);
             if (written.All(readLater.Contains) && !written.Any(read.Contains))
             {
+                readByDefinitions.UnionWith(read);
                 bool twoSided = MapsUsed(nests[k].Loop) > 1;
                 foreach (var w in written)
                 {

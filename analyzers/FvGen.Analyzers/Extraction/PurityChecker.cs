@@ -1,4 +1,6 @@
 using System.Collections.Concurrent;
+using System.Collections.Generic;
+using System.Collections.Immutable;
 using System.Linq;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Operations;
@@ -19,9 +21,16 @@ internal enum PurityKind
 }
 
 /// <summary>A verdict with the reason (<c>writes the field `calls`</c>) and where.</summary>
+/// <remarks>
+/// <see cref="WrittenParameters"/>: the <c>ref</c>/<c>out</c> parameters (by ordinal) a pure method
+/// writes. Writing them is a result handed to the caller, not an effect: the caller is pure when it
+/// passes its own locals there.
+/// </remarks>
 internal sealed record Purity(PurityKind Kind, string Reason, Location? Location)
 {
     public static Purity Pure { get; } = new(PurityKind.Pure, string.Empty, null);
+
+    public ImmutableHashSet<int> WrittenParameters { get; init; } = ImmutableHashSet<int>.Empty;
 }
 
 /// <summary>
@@ -85,26 +94,32 @@ internal sealed class PurityChecker
                 continue;
             }
 
+            var written = new HashSet<int>();
             foreach (var op in body.Descendants())
             {
-                var verdict = Inspect(op, method, depth);
+                var verdict = Inspect(op, method, depth, written);
                 if (verdict.Kind != PurityKind.Pure)
                 {
                     return verdict;
                 }
+            }
+
+            if (written.Count > 0)
+            {
+                return Purity.Pure with { WrittenParameters = written.ToImmutableHashSet() };
             }
         }
 
         return Purity.Pure;
     }
 
-    private Purity Inspect(IOperation op, IMethodSymbol owner, int depth)
+    private Purity Inspect(IOperation op, IMethodSymbol owner, int depth, HashSet<int> written)
     {
         switch (op)
         {
-            case IAssignmentOperation assignment when WritesOutside(assignment.Target, out string what):
+            case IAssignmentOperation assignment when WritesOutside(assignment.Target, written, out string what):
                 return new Purity(PurityKind.Impure, "writes " + what, assignment.Syntax.GetLocation());
-            case IIncrementOrDecrementOperation increment when WritesOutside(increment.Target, out string what):
+            case IIncrementOrDecrementOperation increment when WritesOutside(increment.Target, written, out string what):
                 return new Purity(PurityKind.Impure, "writes " + what, increment.Syntax.GetLocation());
             case IInvocationOperation invocation:
             {
@@ -115,9 +130,23 @@ internal sealed class PurityChecker
                 }
 
                 var verdict = Classify(callee, depth + 1);
-                return verdict.Kind == PurityKind.Impure
-                    ? new Purity(PurityKind.Impure, "calls `" + callee.Name + "`, which " + verdict.Reason, invocation.Syntax.GetLocation())
-                    : Purity.Pure;
+                if (verdict.Kind == PurityKind.Impure)
+                {
+                    return new Purity(PurityKind.Impure, "calls `" + callee.Name + "`, which " + verdict.Reason, invocation.Syntax.GetLocation());
+                }
+
+                // The callee hands results back through ref/out parameters: pure here when what is
+                // passed there is this method's own (a local, a discard, or its own out parameter).
+                foreach (var argument in invocation.Arguments)
+                {
+                    if (argument.Parameter is { } parameter && verdict.WrittenParameters.Contains(parameter.Ordinal)
+                        && WritesOutside(argument.Value, written, out string what))
+                    {
+                        return new Purity(PurityKind.Impure, "passes " + what + " to `" + callee.Name + "`, which writes it", argument.Syntax.GetLocation());
+                    }
+                }
+
+                return Purity.Pure;
             }
 
             default:
@@ -125,15 +154,31 @@ internal sealed class PurityChecker
         }
     }
 
-    private static bool WritesOutside(IOperation target, out string what)
+    /// <summary>
+    /// True when writing <paramref name="target"/> changes state outside the method. Its own
+    /// ref/out parameters are recorded in <paramref name="written"/> instead: results for the caller.
+    /// </summary>
+    private static bool WritesOutside(IOperation target, HashSet<int> written, out string what)
     {
         what = "`" + target.Syntax + "`";
         switch (target)
         {
+            case IDiscardOperation or IDeclarationExpressionOperation:
+                return false;
             case ILocalReferenceOperation local:
                 return local.Local.IsRef;
             case IParameterReferenceOperation parameter:
-                return parameter.Parameter.RefKind is RefKind.Ref or RefKind.Out;
+                if (parameter.Parameter.RefKind is RefKind.Ref or RefKind.Out)
+                {
+                    written.Add(parameter.Parameter.Ordinal);
+                }
+
+                return false;
+            case IFieldReferenceOperation { Instance: IInstanceReferenceOperation { ReferenceKind: InstanceReferenceKind.ImplicitReceiver } }:
+                // A member set in an object initializer (`new State { Depth = … }`): the new value's own.
+                return false;
+            case IPropertyReferenceOperation { Instance: IInstanceReferenceOperation { ReferenceKind: InstanceReferenceKind.ImplicitReceiver }, Property.IsIndexer: false }:
+                return false;
             case IFieldReferenceOperation field:
                 if (field.Field.IsStatic)
                 {

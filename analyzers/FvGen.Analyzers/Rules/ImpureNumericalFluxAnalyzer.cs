@@ -1,4 +1,5 @@
 using System.Collections.Immutable;
+using System.Linq;
 using FvGen.Analyzers.Diagnostics;
 using FvGen.Analyzers.Extraction;
 using Microsoft.CodeAnalysis;
@@ -28,6 +29,13 @@ public sealed class ImpureNumericalFluxAnalyzer : ConservationRuleAnalyzer
         }
 
         var purity = analysis.Purity.Classify(method);
+        if (purity.Kind == PurityKind.Pure && !purity.WrittenParameters.IsEmpty && method.Locations.Length > 0)
+        {
+            // A helper may hand results back through out parameters; a declared flux may not.
+            var parameter = method.Parameters.First(p => purity.WrittenParameters.Contains(p.Ordinal));
+            purity = new Purity(PurityKind.Impure, "writes its parameter `" + parameter.Name + "`; a flux hands back only its return value", method.Locations[0]);
+        }
+
         if (purity.Kind == PurityKind.Impure && method.Locations.Length > 0)
         {
             var where = purity.Location ?? method.Locations[0];

@@ -89,4 +89,67 @@ public sealed class NotAnalyzedTests
             }
             """,
             VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("it calls `IFlux.Evaluate(double, double)`, whose body the checker cannot see"));
+
+    [Fact]
+    public Task StateOperatorThatIsNotComponentWiseIsNotTakenAsArithmetic() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            struct Pair
+            {
+                public double A, B;
+                public Pair(double a, double b) { A = a; B = b; }
+
+                // Mixes the components: not the sum it looks like.
+                public static Pair operator +(Pair x, Pair y) => new(x.A + y.B, x.B + y.A);
+            }
+
+            static class Kernel
+            {
+                [ConservativeUpdate]
+                public static void Scatter(Pair[] flux, Pair[] r)
+                {
+                    for (int i = 1; i < r.Length; i++)
+                    {
+                        r[i - 1] = {|#0:r[i - 1] + flux[i]|};
+                        r[i] = r[i] + flux[i];
+                    }
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("the operator `Pair.operator +(Pair, Pair)` is not visibly component-wise (each field of the result the same field of the operands, combined by that operator)"));
+
+    [Fact]
+    public Task StateOperatorsWrittenComponentWiseAreArithmetic() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            struct Pair
+            {
+                public double A, B;
+
+                public static Pair operator +(Pair x, Pair y) => new Pair { A = x.A + y.A, B = x.B + y.B };
+
+                public static Pair operator -(Pair x, Pair y)
+                {
+                    Pair d;
+                    d.A = x.A - y.A;
+                    d.B = x.B - y.B;
+                    return d;
+                }
+
+                public static Pair operator /(Pair x, double s) => new Pair { A = x.A / s, B = x.B / s };
+            }
+
+            static class Kernel
+            {
+                [ConservativeUpdate]
+                public static void Scatter([FaceData] Pair[] flux, Pair[] r, double[] vol)
+                {
+                    for (int i = 1; i < r.Length; i++)
+                    {
+                        r[i - 1] -= flux[i] / vol[i - 1];
+                        r[i] += flux[i] / vol[i];
+                    }
+                }
+            }
+            """);
 }

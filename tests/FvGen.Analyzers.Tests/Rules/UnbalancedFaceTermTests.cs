@@ -55,4 +55,37 @@ public sealed class UnbalancedFaceTermTests
                 }
             }
             """);
+
+    private const string UpwindStepWithDecay = """
+        public static class Decay
+        {
+            [FvGen.ConservativeUpdate]
+            public static void Step(double[] u, double[] next, double c, double k)
+            {
+                for (int i = 1; i < u.Length; i++)
+                {
+                    double here = u[i];
+                    next[i] = here - c * (here - u[i - 1]) - k * here;
+                }
+            }
+        }
+        """;
+
+    [Fact]
+    public async Task DecayNextToAnUpwindStepIsASource()
+    {
+        // The decay -k·u[i] is a source; the old total 1 is carried and c moves mass from upwind only.
+        var result = await FvGen.Analyzers.Tests.Harness.AnalyzerRun.RunAsync(UpwindStepWithDecay);
+        Assert.True(!result.Fvc.Any(), FvGen.Analyzers.Tests.Harness.AnalyzerRun.Describe(result.Fvc));
+    }
+
+    [Fact]
+    public async Task PrecedenceSlipThatLosesTheOldTotalIsNotTakenForADecay()
+    {
+        // `- c * here - u[i - 1]`: the upwind cell's old value leaves with weight 1 and -c·u[i] looks like a
+        // decay, but then no class carries the old total (common practice: Σ next = Σ u for pure transport).
+        var result = await FvGen.Analyzers.Tests.Harness.AnalyzerRun.RunAsync(
+            UpwindStepWithDecay.Replace("here - c * (here - u[i - 1]) - k * here", "here - c * here - u[i - 1]", StringComparison.Ordinal));
+        Assert.Contains(result.Fvc, d => d.Id == DiagnosticIds.UnbalancedFaceTerm);
+    }
 }

@@ -1,5 +1,5 @@
-// expect: FVC0004
-// why: the x-face loop gives qx to rate[i, j] but no longer takes it from rate[i - 1, j].
+// expect: none
+// why: relabelled from FVC0004: with rate[i - 1, j] -= qx gone the x loop writes one cell, rate[i, j] += k·(T[i - 1, j] − T[i, j])/dx², whose T[•] class sums to 0 — a one-sided but telescoping stencil (wrong physics, conserved total), so by the criterion it conserves.
 using System;
 
 namespace Corpus.Diffusion2D;
