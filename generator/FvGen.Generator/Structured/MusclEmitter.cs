@@ -44,6 +44,46 @@ internal static class MusclEmitter
         });
         w.Line("return phi * backward;");
         w.Close();
+        ExtrapolationFunctions(w, model);
+    }
+
+    /// <summary>
+    /// Writes the two face-value extrapolations as static local functions, so the face loops pass the far
+    /// neighbour by a plain offset from the face's cells and never pick its index by a condition.
+    /// </summary>
+    private static void ExtrapolationFunctions(IndentedWriter w, ResidualKernelModel model)
+    {
+        string s = model.State.FullyQualifiedName;
+        w.Line();
+        w.Line("// The left cell's value extrapolated to its right face, its slope limited between (farLeft, left) and (left, right).");
+        w.Line("[global::System.Runtime.CompilerServices.MethodImpl(global::System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]");
+        w.Open("static " + s + " LeftFaceValue(in " + s + " uLL, in " + s + " uL, in " + s + " uR, double widthLL, double widthL, double distanceLR)");
+        w.Line(s + " value = uL;");
+        w.Line("double distanceLL = 0.5 * (widthLL + widthL);");
+        w.Line("double ratio = distanceLL / distanceLR;");
+        w.Line("double reach = 0.5 * widthL / distanceLL;");
+        foreach (var c in model.State.Components)
+        {
+            w.Line("value." + c.Access + " += reach * LimitedSlope(uL." + c.Access + " - uLL." + c.Access + ", uR." + c.Access + " - uL." + c.Access + ", ratio);");
+        }
+
+        w.Line("return value;");
+        w.Close();
+        w.Line();
+        w.Line("// The right cell's value extrapolated to its left face, its slope limited between (left, right) and (right, farRight).");
+        w.Line("[global::System.Runtime.CompilerServices.MethodImpl(global::System.Runtime.CompilerServices.MethodImplOptions.AggressiveInlining)]");
+        w.Open("static " + s + " RightFaceValue(in " + s + " uL, in " + s + " uR, in " + s + " uRR, double widthR, double widthRR, double distanceLR)");
+        w.Line(s + " value = uR;");
+        w.Line("double distanceRR = 0.5 * (widthR + widthRR);");
+        w.Line("double ratio = distanceLR / distanceRR;");
+        w.Line("double reach = 0.5 * widthR / distanceLR;");
+        foreach (var c in model.State.Components)
+        {
+            w.Line("value." + c.Access + " -= reach * LimitedSlope(uR." + c.Access + " - uL." + c.Access + ", uRR." + c.Access + " - uR." + c.Access + ", ratio);");
+        }
+
+        w.Line("return value;");
+        w.Close();
     }
 
     /// <summary>
@@ -55,18 +95,19 @@ internal static class MusclEmitter
         IndentedWriter w, ResidualKernelModel model, string axis, string count, string stride, string left, string right, string leftAlong, string rightAlong)
     {
         string s = model.State.FullyQualifiedName;
-        w.Line("int leftLeft = " + leftAlong + " >= 1 ? " + left + " - " + stride + " : " + axis + "Periodic ? " + left + " + (" + count + " - 1) * " + stride + " : -1;");
-        w.Line("int rightRight = " + rightAlong + " <= " + count + " - 2 ? " + right + " + " + stride + " : " + axis + "Periodic ? " + right + " - (" + count + " - 1) * " + stride + " : -1;");
         if (model.UserReconstruction is { } user)
         {
             // A missing second neighbour (next to a boundary patch) is replaced by the cell itself.
             string m = user.StateModifier;
+            w.Line("int leftLeft = " + leftAlong + " >= 1 ? " + left + " - " + stride + " : " + axis + "Periodic ? " + left + " + (" + count + " - 1) * " + stride + " : -1;");
+            w.Line("int rightRight = " + rightAlong + " <= " + count + " - 2 ? " + right + " + " + stride + " : " + axis + "Periodic ? " + right + " - (" + count + " - 1) * " + stride + " : -1;");
             w.Line(model.TypeName + "." + user.Name + "(" + m + "state[leftLeft >= 0 ? leftLeft : " + left + "], " + m + "state[" + left + "], " + m + "state[" + right + "], "
                 + m + "state[rightRight >= 0 ? rightRight : " + right + "], out " + s + " leftFace, out " + s + " rightFace);");
             return;
         }
 
-        // Copies, not refs: the JIT keeps the components of small struct locals in registers.
+        // Copies, not refs: the JIT keeps the components of small struct locals in registers. The far
+        // neighbours are read at plain offsets, each in the branch that has it (inside, or across a periodic wrap).
         string widths = axis + "Widths";
         w.Line(s + " uL = state[" + left + "];");
         w.Line(s + " uR = state[" + right + "];");
@@ -75,29 +116,22 @@ internal static class MusclEmitter
         w.Line("double widthL = " + widths + "[" + leftAlong + "];");
         w.Line("double widthR = " + widths + "[" + rightAlong + "];");
         w.Line("double distanceLR = 0.5 * (widthL + widthR);");
-        w.Line("if (leftLeft >= 0)");
+        w.Line("if (" + leftAlong + " >= 1)");
         w.Open();
-        w.Line(s + " uLL = state[leftLeft];");
-        w.Line("double distanceLL = 0.5 * (" + widths + "[" + leftAlong + " >= 1 ? " + leftAlong + " - 1 : " + count + " - 1] + widthL);");
-        w.Line("double ratio = distanceLL / distanceLR;");
-        w.Line("double reach = 0.5 * widthL / distanceLL;");
-        foreach (var c in model.State.Components)
-        {
-            w.Line("leftFace." + c.Access + " += reach * LimitedSlope(uL." + c.Access + " - uLL." + c.Access + ", uR." + c.Access + " - uL." + c.Access + ", ratio);");
-        }
-
+        w.Line("leftFace = LeftFaceValue(state[" + left + " - " + stride + "], uL, uR, " + widths + "[" + leftAlong + " - 1], widthL, distanceLR);");
         w.Close();
-        w.Line("if (rightRight >= 0)");
+        w.Line("else if (" + axis + "Periodic)");
         w.Open();
-        w.Line(s + " uRR = state[rightRight];");
-        w.Line("double distanceRR = 0.5 * (widthR + " + widths + "[" + rightAlong + " <= " + count + " - 2 ? " + rightAlong + " + 1 : 0]);");
-        w.Line("double ratio = distanceLR / distanceRR;");
-        w.Line("double reach = 0.5 * widthR / distanceLR;");
-        foreach (var c in model.State.Components)
-        {
-            w.Line("rightFace." + c.Access + " -= reach * LimitedSlope(uR." + c.Access + " - uL." + c.Access + ", uRR." + c.Access + " - uR." + c.Access + ", ratio);");
-        }
-
+        w.Line("leftFace = LeftFaceValue(state[" + left + " + (" + count + " - 1) * " + stride + "], uL, uR, " + widths + "[" + count + " - 1], widthL, distanceLR);");
+        w.Close();
+        w.Line();
+        w.Line("if (" + rightAlong + " <= " + count + " - 2)");
+        w.Open();
+        w.Line("rightFace = RightFaceValue(uL, uR, state[" + right + " + " + stride + "], widthR, " + widths + "[" + rightAlong + " + 1], distanceLR);");
+        w.Close();
+        w.Line("else if (" + axis + "Periodic)");
+        w.Open();
+        w.Line("rightFace = RightFaceValue(uL, uR, state[" + right + " - (" + count + " - 1) * " + stride + "], widthR, " + widths + "[0], distanceLR);");
         w.Close();
     }
 }
