@@ -292,4 +292,148 @@ public static class HandWrittenResiduals
             r[c] = r[c] / volumes[c];
         }
     }
+
+    /// <summary>3-D grid with walls on all six sides, serial scatter, first order.</summary>
+    public static void Structured3D(StructuredGrid3D grid, ReadOnlySpan<Water> u, Span<Water> r)
+    {
+        int nx = grid.Nx, ny = grid.Ny, nz = grid.Nz, plane = nx * ny;
+        ReadOnlySpan<double> xn = grid.X.Nodes, xc = grid.X.Centres, dx = grid.X.Widths;
+        ReadOnlySpan<double> yn = grid.Y.Nodes, yc = grid.Y.Centres, dy = grid.Y.Widths;
+        ReadOnlySpan<double> zn = grid.Z.Nodes, zc = grid.Z.Centres, dz = grid.Z.Widths;
+        r.Clear();
+        var ex = new Vec3(1, 0, 0);
+        var ey = new Vec3(0, 1, 0);
+        var ez = new Vec3(0, 0, 1);
+        for (int k = 0; k < nz; k++)
+        {
+            for (int j = 0; j < ny; j++)
+            {
+                int row = nx * j + plane * k;
+                double area = dy[j] * dz[k];
+                for (int i = 1; i < nx; i++)
+                {
+                    var face = new FaceGeometry(ex, area, new Vec3(xn[i], yc[j], zc[k]), xc[i] - xc[i - 1]);
+                    Water f = ShallowWaterPhysics.Rusanov(in u[row + i - 1], in u[row + i], in face) * area;
+                    r[row + i - 1] -= f;
+                    r[row + i] += f;
+                }
+
+                var west = new FaceGeometry(-ex, area, new Vec3(xn[0], yc[j], zc[k]), 0.5 * dx[0]);
+                r[row] -= ShallowWaterPhysics.Wall(in u[row], in west) * area;
+                var east = new FaceGeometry(ex, area, new Vec3(xn[nx], yc[j], zc[k]), 0.5 * dx[nx - 1]);
+                r[row + nx - 1] -= ShallowWaterPhysics.Wall(in u[row + nx - 1], in east) * area;
+            }
+        }
+
+        for (int k = 0; k < nz; k++)
+        {
+            for (int i = 0; i < nx; i++)
+            {
+                double area = dx[i] * dz[k];
+                for (int j = 1; j < ny; j++)
+                {
+                    int c = i + nx * j + plane * k;
+                    var face = new FaceGeometry(ey, area, new Vec3(xc[i], yn[j], zc[k]), yc[j] - yc[j - 1]);
+                    Water f = ShallowWaterPhysics.Rusanov(in u[c - nx], in u[c], in face) * area;
+                    r[c - nx] -= f;
+                    r[c] += f;
+                }
+
+                int low = i + plane * k, high = low + nx * (ny - 1);
+                var south = new FaceGeometry(-ey, area, new Vec3(xc[i], yn[0], zc[k]), 0.5 * dy[0]);
+                r[low] -= ShallowWaterPhysics.Wall(in u[low], in south) * area;
+                var north = new FaceGeometry(ey, area, new Vec3(xc[i], yn[ny], zc[k]), 0.5 * dy[ny - 1]);
+                r[high] -= ShallowWaterPhysics.Wall(in u[high], in north) * area;
+            }
+        }
+
+        for (int j = 0; j < ny; j++)
+        {
+            for (int i = 0; i < nx; i++)
+            {
+                double area = dx[i] * dy[j];
+                for (int k = 1; k < nz; k++)
+                {
+                    int c = i + nx * j + plane * k;
+                    var face = new FaceGeometry(ez, area, new Vec3(xc[i], yc[j], zn[k]), zc[k] - zc[k - 1]);
+                    Water f = ShallowWaterPhysics.Rusanov(in u[c - plane], in u[c], in face) * area;
+                    r[c - plane] -= f;
+                    r[c] += f;
+                }
+
+                int bottom = i + nx * j, top = bottom + plane * (nz - 1);
+                var floor = new FaceGeometry(-ez, area, new Vec3(xc[i], yc[j], zn[0]), 0.5 * dz[0]);
+                r[bottom] -= ShallowWaterPhysics.Wall(in u[bottom], in floor) * area;
+                var lid = new FaceGeometry(ez, area, new Vec3(xc[i], yc[j], zn[nz]), 0.5 * dz[nz - 1]);
+                r[top] -= ShallowWaterPhysics.Wall(in u[top], in lid) * area;
+            }
+        }
+
+        var volumes = grid.CellVolumes;
+        for (int c = 0; c < r.Length; c++)
+        {
+            r[c] = r[c] / volumes[c];
+        }
+    }
+
+    /// <summary>
+    /// 2-D grid, walls on all four sides, parallel gather: x-face fluxes (flux in +x, boundary ones
+    /// included) into a buffer in parallel rows, y-face fluxes in parallel columns, then each cell
+    /// sums x-low, x-high, y-low, y-high in parallel rows.
+    /// </summary>
+    public static void StructuredGather(StructuredGrid2D grid, Water[] u, Water[] r, Water[] faceFlux, ParallelOptions options)
+    {
+        int nx = grid.Nx, ny = grid.Ny, xPlanes = nx + 1, yFirst = xPlanes * ny;
+        Parallel.For(0, ny, options, j =>
+        {
+            ReadOnlySpan<double> xn = grid.X.Nodes, xc = grid.X.Centres, dx = grid.X.Widths;
+            ReadOnlySpan<double> yc = grid.Y.Centres, dy = grid.Y.Widths;
+            var ex = new Vec3(1, 0, 0);
+            int row = nx * j, faces = xPlanes * j;
+            double area = dy[j];
+            var west = new FaceGeometry(-ex, area, new Vec3(xn[0], yc[j], 0), 0.5 * dx[0]);
+            faceFlux[faces] = -(ShallowWaterPhysics.Wall(in u[row], in west) * area);
+            for (int i = 1; i < nx; i++)
+            {
+                var face = new FaceGeometry(ex, area, new Vec3(xn[i], yc[j], 0), xc[i] - xc[i - 1]);
+                faceFlux[faces + i] = ShallowWaterPhysics.Rusanov(in u[row + i - 1], in u[row + i], in face) * area;
+            }
+
+            var east = new FaceGeometry(ex, area, new Vec3(xn[nx], yc[j], 0), 0.5 * dx[nx - 1]);
+            faceFlux[faces + nx] = ShallowWaterPhysics.Wall(in u[row + nx - 1], in east) * area;
+        });
+
+        Parallel.For(0, nx, options, i =>
+        {
+            ReadOnlySpan<double> xc = grid.X.Centres, dx = grid.X.Widths;
+            ReadOnlySpan<double> yn = grid.Y.Nodes, yc = grid.Y.Centres, dy = grid.Y.Widths;
+            var ey = new Vec3(0, 1, 0);
+            double area = dx[i];
+            var south = new FaceGeometry(-ey, area, new Vec3(xc[i], yn[0], 0), 0.5 * dy[0]);
+            faceFlux[yFirst + i] = -(ShallowWaterPhysics.Wall(in u[i], in south) * area);
+            for (int j = 1; j < ny; j++)
+            {
+                int c = i + nx * j;
+                var face = new FaceGeometry(ey, area, new Vec3(xc[i], yn[j], 0), yc[j] - yc[j - 1]);
+                faceFlux[yFirst + c] = ShallowWaterPhysics.Rusanov(in u[c - nx], in u[c], in face) * area;
+            }
+
+            int top = i + nx * (ny - 1);
+            var north = new FaceGeometry(ey, area, new Vec3(xc[i], yn[ny], 0), 0.5 * dy[ny - 1]);
+            faceFlux[yFirst + top + nx] = ShallowWaterPhysics.Wall(in u[top], in north) * area;
+        });
+
+        Parallel.For(0, ny, options, j =>
+        {
+            ReadOnlySpan<double> volumes = grid.CellVolumes;
+            for (int i = 0; i < nx; i++)
+            {
+                int c = i + nx * j, xLow = i + xPlanes * j, yLow = yFirst + c;
+                Water sum = faceFlux[xLow] - faceFlux[xLow + 1];
+                sum += faceFlux[yLow];
+                sum -= faceFlux[yLow + nx];
+                r[c] = sum / volumes[c];
+            }
+        });
+    }
 }

@@ -18,6 +18,9 @@ public class ResidualBenchmarks
     private Water[] _gridState = null!, _gridResidual = null!;
     private Water[] _meshState = null!, _meshResidual = null!, _faceFlux = null!;
     private BoundaryBinding<ShallowWaterPhysics.Boundary> _gridWalls = null!, _meshWalls = null!;
+    private StructuredGrid3D _cube = null!;
+    private Water[] _cubeState = null!, _cubeResidual = null!, _gridFaceFlux = null!;
+    private BoundaryBinding<ShallowWaterPhysics.Boundary> _cubeWalls = null!;
     private readonly ParallelOptions _twoThreads = new() { MaxDegreeOfParallelism = 2 };
 
     [GlobalSetup]
@@ -47,6 +50,15 @@ public class ResidualBenchmarks
             _meshWalls.Bind(name, ShallowWaterPhysics.Boundary.Wall);
         }
 
+        _gridFaceFlux = new Water[_grid.FaceCount];
+        _cube = new StructuredGrid3D(
+            GridAxis.Uniform(64, 0, 1), GridAxis.Uniform(64, 0, 1), GridAxis.Uniform(64, 0, 1),
+            SideBoundary.Patch("walls"), SideBoundary.Patch("walls"), SideBoundary.Patch("walls"),
+            SideBoundary.Patch("walls"), SideBoundary.Patch("walls"), SideBoundary.Patch("walls"));
+        _cubeState = RandomWater(random, _cube.CellCount);
+        _cubeResidual = new Water[_cube.CellCount];
+        _cubeWalls = new BoundaryBinding<ShallowWaterPhysics.Boundary>().Bind("walls", ShallowWaterPhysics.Boundary.Wall);
+
         // Both sides of each comparison must do the same work: check that they agree to rounding.
         Agree("structured", HandWrittenStructured, GeneratedStructured, _gridResidual);
         Agree("unstructured", HandWrittenUnstructured, GeneratedUnstructured, _meshResidual);
@@ -54,6 +66,8 @@ public class ResidualBenchmarks
         Agree("structured slabs", HandWrittenStructuredSlabs, GeneratedStructuredSlabs, _gridResidual);
         Agree("MUSCL", HandWrittenMuscl1D, GeneratedMuscl1D, _ringResidual);
         Agree("coloured", HandWrittenColoured, GeneratedColoured, _meshResidual);
+        Agree("structured 3-D", HandWrittenStructured3D, GeneratedStructured3D, _cubeResidual);
+        Agree("structured gather", HandWrittenGather2D, GeneratedGather2D, _gridResidual);
     }
 
     private static void Agree(string what, Action handWritten, Action generated, Water[] residual)
@@ -107,6 +121,18 @@ public class ResidualBenchmarks
 
     [Benchmark, BenchmarkCategory("Unstructured triangles, 51 200 cells, coloured, 2 threads")]
     public void GeneratedColoured() => ShallowWaterPhysics.UnstructuredColoured(_mesh, _meshState, _meshResidual, _meshWalls, _twoThreads);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Structured 3-D, 64x64x64, serial")]
+    public void HandWrittenStructured3D() => HandWrittenResiduals.Structured3D(_cube, _cubeState, _cubeResidual);
+
+    [Benchmark, BenchmarkCategory("Structured 3-D, 64x64x64, serial")]
+    public void GeneratedStructured3D() => ShallowWaterPhysics.Structured3D(_cube, _cubeState, _cubeResidual, _cubeWalls);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Structured 2-D, 256x256, gather, 2 threads")]
+    public void HandWrittenGather2D() => HandWrittenResiduals.StructuredGather(_grid, _gridState, _gridResidual, _gridFaceFlux, _twoThreads);
+
+    [Benchmark, BenchmarkCategory("Structured 2-D, 256x256, gather, 2 threads")]
+    public void GeneratedGather2D() => ShallowWaterPhysics.StructuredGather(_grid, _gridState, _gridResidual, _gridFaceFlux, _gridWalls, _twoThreads);
 
     private static Water[] RandomWater(Random random, int count)
     {

@@ -80,4 +80,11 @@ public static partial class ShallowWaterPhysics
     [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelGather)]
     public static partial void UnstructuredGather(
         UnstructuredMesh mesh, ReadOnlyMemory<Water> state, Memory<Water> residual, [FaceData] Memory<Water> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);
+
+    [ResidualKernel(nameof(Rusanov))]
+    public static partial void Structured3D(StructuredGrid3D grid, ReadOnlySpan<Water> state, Span<Water> residual, BoundaryBinding<Boundary> boundaries);
+
+    [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelGather)]
+    public static partial void StructuredGather(
+        StructuredGrid2D grid, ReadOnlyMemory<Water> state, Memory<Water> residual, [FaceData] Memory<Water> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);
 }
