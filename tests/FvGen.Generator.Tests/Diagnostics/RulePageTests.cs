@@ -1,5 +1,5 @@
-using System.Runtime.CompilerServices;
 using FvGen.Generator.Diagnostics;
+using FvGen.Generator.Tests.Support;
 
 namespace FvGen.Generator.Tests.Diagnostics;
 
@@ -34,6 +34,5 @@ public sealed class RulePageTests
         Assert.All(ids, id => Assert.Contains(id + " |", releases));
     }
 
-    private static string RepositoryRoot([CallerFilePath] string path = "") =>
-        Path.GetFullPath(Path.Combine(Path.GetDirectoryName(path)!, "..", "..", ".."));
+    private static string RepositoryRoot() => RepositoryPaths.Root;
 }

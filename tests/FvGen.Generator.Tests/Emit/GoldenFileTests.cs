@@ -1,4 +1,3 @@
-using System.Runtime.CompilerServices;
 using System.Text;
 using FvGen.Generator.Tests.Support;
 using Microsoft.CodeAnalysis.CSharp.Testing;
@@ -88,6 +87,6 @@ public sealed class GoldenFileTests
         await test.RunAsync();
     }
 
-    private static string GoldenFolder([CallerFilePath] string path = "") =>
-        Path.Combine(Path.GetDirectoryName(Path.GetDirectoryName(path))!, "Golden");
+    private static string GoldenFolder() =>
+        Path.Combine(RepositoryPaths.Root, "tests", "FvGen.Generator.Tests", "Golden");
 }
