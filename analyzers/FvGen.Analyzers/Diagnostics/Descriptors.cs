@@ -5,8 +5,11 @@ namespace FvGen.Analyzers.Diagnostics;
 /// <summary>The descriptors of the conservation rules; titles and messages come from <c>Resources/RuleStrings.resx</c>.</summary>
 internal static class Descriptors
 {
-    /// <summary>Where the rule pages live; each rule links to <c>docs/rules/&lt;ID&gt;.md</c> under it.</summary>
-    public const string HelpBase = "https://github.com/fvgen/fvgen/blob/main/docs/rules/";
+    /// <summary>
+    /// Where the rule pages live; each rule links to <c>docs/rules/&lt;ID&gt;.md</c> under it. A placeholder
+    /// until the documentation has a published address; the generator uses the same base.
+    /// </summary>
+    public const string HelpBase = "https://fvgen.invalid/docs/rules/";
 
     public const string Category = "Conservation";
 

@@ -138,35 +138,8 @@ public sealed class GeneratedKernelsAreProvenTests
 
     private static async Task<List<Diagnostic>> AnalyzeAsync(Compilation compilation)
     {
-        var exceptions = new List<Exception>();
-        var options = new CompilationWithAnalyzersOptions(
-            new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, new AllMethodsOptions()),
-            (e, _, _) => { lock (exceptions) { exceptions.Add(e); } },
-            concurrentAnalysis: false,
-            logAnalyzerExecutionTime: false);
-        var diagnostics = await compilation.WithAnalyzers([.. AllRules.Analyzers()], options).GetAnalyzerDiagnosticsAsync();
-        Assert.Empty(exceptions);
-        return diagnostics.Where(d => d.Id.StartsWith("FVC", StringComparison.Ordinal)).ToList();
-    }
-
-    /// <summary>The .editorconfig key that widens the scope to every method, on every tree.</summary>
-    private sealed class AllMethodsOptions : AnalyzerConfigOptionsProvider
-    {
-        private static readonly AnalyzerConfigOptions Options = new Fixed();
-
-        public override AnalyzerConfigOptions GlobalOptions => Options;
-
-        public override AnalyzerConfigOptions GetOptions(SyntaxTree tree) => Options;
-
-        public override AnalyzerConfigOptions GetOptions(AdditionalText textFile) => Options;
-
-        private sealed class Fixed : AnalyzerConfigOptions
-        {
-            public override bool TryGetValue(string key, out string value)
-            {
-                value = "true";
-                return key == FvGen.Analyzers.Rules.ConservationScope.AllMethodsKey;
-            }
-        }
+        var result = await AnalyzerRun.RunAsync(compilation, allMethods: true);
+        Assert.Empty(result.Exceptions);
+        return result.Fvc.ToList();
     }
 }

@@ -19,7 +19,7 @@ internal static class AnalyzerRun
         public IEnumerable<Diagnostic> CompilerErrors => Compiler.Where(d => d.Severity == DiagnosticSeverity.Error);
     }
 
-    public static async Task<Result> RunAsync(string source, string? editorConfigAllMethods = null)
+    public static Task<Result> RunAsync(string source)
     {
         var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest), path: "/0/Kernel.cs");
         var compilation = CSharpCompilation.Create(
@@ -27,9 +27,18 @@ internal static class AnalyzerRun
             [tree],
             TestReferences.All,
             new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
+        return RunAsync(compilation);
+    }
+
+    /// <summary>Runs the rules on <paramref name="compilation"/>; <paramref name="allMethods"/> sets the .editorconfig key that widens the scope to every method.</summary>
+    public static async Task<Result> RunAsync(Compilation compilation, bool allMethods = false)
+    {
         var exceptions = new List<Exception>();
+        var analyzerOptions = allMethods
+            ? new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty, new AllMethodsOptions())
+            : new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty);
         var options = new CompilationWithAnalyzersOptions(
-            new AnalyzerOptions(ImmutableArray<AdditionalText>.Empty),
+            analyzerOptions,
             (e, _, _) => { lock (exceptions) { exceptions.Add(e); } },
             concurrentAnalysis: false,
             logAnalyzerExecutionTime: false);
@@ -40,4 +49,25 @@ internal static class AnalyzerRun
 
     public static string Describe(IEnumerable<Diagnostic> diagnostics) =>
         string.Join("\n", diagnostics.Select(d => $"{d.Id} {d.Location.GetLineSpan().StartLinePosition}: {d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)}"));
+
+    /// <summary>The .editorconfig key that widens the scope to every method, on every tree.</summary>
+    private sealed class AllMethodsOptions : AnalyzerConfigOptionsProvider
+    {
+        private static readonly AnalyzerConfigOptions Options = new Fixed();
+
+        public override AnalyzerConfigOptions GlobalOptions => Options;
+
+        public override AnalyzerConfigOptions GetOptions(SyntaxTree tree) => Options;
+
+        public override AnalyzerConfigOptions GetOptions(AdditionalText textFile) => Options;
+
+        private sealed class Fixed : AnalyzerConfigOptions
+        {
+            public override bool TryGetValue(string key, out string value)
+            {
+                value = "true";
+                return key == FvGen.Analyzers.Rules.ConservationScope.AllMethodsKey;
+            }
+        }
+    }
 }
