@@ -29,10 +29,7 @@ public sealed class ForwardEuler<TState> : TimeIntegrator<TState>
     {
         Span<double> u = Components(state);
         Span<double> r = EvaluateStage(0, state, time, dt, residual, observer);
-        for (int i = 0; i < u.Length; i++)
-        {
-            u[i] += dt * r[i];
-        }
+        EulerStage(u, r, dt);
     }
 
     private static IMesh CheckMesh(IMesh mesh)

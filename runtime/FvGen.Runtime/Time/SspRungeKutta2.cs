@@ -40,16 +40,10 @@ public sealed class SspRungeKutta2<TState> : TimeIntegrator<TState>
         Span<double> u = Components(state);
 
         Span<double> r = EvaluateStage(0, state, time, dt, residual, observer);
-        for (int i = 0; i < u.Length; i++)
-        {
-            u[i] += dt * r[i];
-        }
+        EulerStage(u, r, dt);
 
         r = EvaluateStage(1, state, time, dt, residual, observer);
-        for (int i = 0; i < u.Length; i++)
-        {
-            u[i] = 0.5 * u0[i] + 0.5 * (u[i] + dt * r[i]);
-        }
+        ShuOsherStage(u, u0, r, 0.5, 0.5, dt);
     }
 
     private static IMesh CheckMesh(IMesh mesh)

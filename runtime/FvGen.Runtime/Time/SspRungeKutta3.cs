@@ -41,24 +41,15 @@ public sealed class SspRungeKutta3<TState> : TimeIntegrator<TState>
         Span<double> u = Components(state);
 
         Span<double> r = EvaluateStage(0, state, time, dt, residual, observer);
-        for (int i = 0; i < u.Length; i++)
-        {
-            u[i] += dt * r[i];
-        }
+        EulerStage(u, r, dt);
 
         r = EvaluateStage(1, state, time, dt, residual, observer);
-        for (int i = 0; i < u.Length; i++)
-        {
-            u[i] = 0.75 * u0[i] + 0.25 * (u[i] + dt * r[i]);
-        }
+        ShuOsherStage(u, u0, r, 0.75, 0.25, dt);
 
         r = EvaluateStage(2, state, time, dt, residual, observer);
         const double oneThird = 1.0 / 3.0;
         const double twoThirds = 2.0 / 3.0;
-        for (int i = 0; i < u.Length; i++)
-        {
-            u[i] = oneThird * u0[i] + twoThirds * (u[i] + dt * r[i]);
-        }
+        ShuOsherStage(u, u0, r, oneThird, twoThirds, dt);
     }
 
     private static IMesh CheckMesh(IMesh mesh)

@@ -139,6 +139,24 @@ public abstract class TimeIntegrator<TState>
         return MemoryMarshal.Cast<TState, double>(_residual.AsSpan());
     }
 
+    /// <summary>A forward-Euler stage in place: u ← u + Δt r.</summary>
+    protected static void EulerStage(Span<double> u, ReadOnlySpan<double> r, double dt)
+    {
+        for (int i = 0; i < u.Length; i++)
+        {
+            u[i] += dt * r[i];
+        }
+    }
+
+    /// <summary>A Shu–Osher stage in place: u ← a·u0 + b·(u + Δt r), with both weights given exactly.</summary>
+    protected static void ShuOsherStage(Span<double> u, ReadOnlySpan<double> u0, ReadOnlySpan<double> r, double a, double b, double dt)
+    {
+        for (int i = 0; i < u.Length; i++)
+        {
+            u[i] = a * u0[i] + b * (u[i] + dt * r[i]);
+        }
+    }
+
     /// <summary>The state seen as a flat span of doubles.</summary>
     protected static Span<double> Components(Span<TState> state) => MemoryMarshal.Cast<TState, double>(state);
 }
