@@ -18,7 +18,7 @@ public sealed class RulePageTests
         {
             string page = File.ReadAllText(Path.Combine(folder, descriptor.Id + ".md"));
             Assert.StartsWith("# " + descriptor.Id + ": " + descriptor.Title, page);
-            foreach (string section in new[] { "## What it detects", "## Non-compliant", "## Compliant", "## How to fix", "## How to suppress" })
+            foreach (string section in new[] { "## What it detects", "## Non-compliant", "## Compliant", "## How to fix", "## Configure or suppress" })
             {
                 Assert.Contains(section, page);
             }
