@@ -9,111 +9,123 @@ using Microsoft.CodeAnalysis.CodeActions;
 using Microsoft.CodeAnalysis.CodeFixes;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
+using Microsoft.CodeAnalysis.Editing;
 using Microsoft.CodeAnalysis.Formatting;
 
 namespace FvGen.Analyzers.CodeFixes;
 
 /// <summary>
 /// FVC0001: appends the missing counterpart to the write — the offending term moved one cell along
-/// the loop variable, with the opposite weight. Fix-all adds every counterpart of a document at once
-/// (several may belong to one write, which a text-merging batch fixer would drop).
+/// the loop variable, with the opposite weight. A term that reaches the write through a local face
+/// flux (<c>double fe = F(u[i], u[i + 1]);</c>) gets a second local for the other face, declared
+/// right after the first (<c>double fw = F(u[i - 1], u[i]);</c>), and the write uses it. Fix-all adds
+/// every counterpart of a document at once (several may belong to one write, which a text-merging
+/// batch fixer would drop).
 /// </summary>
 [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(DroppedFaceTermFix))]
 [Shared]
-public sealed class DroppedFaceTermFix : CodeFixProvider
+public sealed class DroppedFaceTermFix : FindingFix
 {
-    public override ImmutableArray<string> FixableDiagnosticIds => ImmutableArray.Create(DiagnosticIds.DroppedFaceTerm);
+    public DroppedFaceTermFix()
+        : base(DiagnosticIds.DroppedFaceTerm)
+    {
+    }
 
     public override FixAllProvider GetFixAllProvider() =>
-        FixAllProvider.Create(async (context, document, diagnostics) => await ApplyAsync(document, diagnostics, context.CancellationToken).ConfigureAwait(false));
+        FixAllProvider.Create(async (context, document, diagnostics) =>
+            await FixSource.ReadAsync(document, context.CancellationToken).ConfigureAwait(false) is { } source
+                ? await ApplyAsync(source, diagnostics, context.CancellationToken).ConfigureAwait(false)
+                : document);
 
-    public override async Task RegisterCodeFixesAsync(CodeFixContext context)
+    private protected override IEnumerable<CodeAction> Offer(FixSource source, Diagnostic diagnostic, CancellationToken cancellationToken)
     {
-        var root = await context.Document.GetSyntaxRootAsync(context.CancellationToken).ConfigureAwait(false);
-        if (root is null)
+        if (CounterpartPlan.Create(source, diagnostic, cancellationToken) is not { } plan)
         {
-            return;
+            return Enumerable.Empty<CodeAction>();
         }
 
-        foreach (var diagnostic in context.Diagnostics)
+        string title = plan.NewLocal is { } local
+            ? "Add the other face `" + local.PreferredName + " = " + local.Initializer + "` and its term `" + plan.Addend(local.PreferredName) + "`"
+            : "Add the missing counterpart `" + plan.Addend(string.Empty) + "`";
+        return new[]
         {
-            var plan = Plan(root, diagnostic);
-            if (plan is null)
-            {
-                continue;
-            }
-
-            context.RegisterCodeFix(
-                CodeAction.Create(
-                    "Add the missing counterpart `" + plan.Value.Addend + "`",
-                    ct => ApplyAsync(context.Document, ImmutableArray.Create(diagnostic), ct),
-                    EquivalenceKeys.AddCounterpart),
-                diagnostic);
-        }
+            CodeAction.Create(title, ct => ApplyAsync(source, ImmutableArray.Create(diagnostic), ct), EquivalenceKeys.AddCounterpart),
+        };
     }
 
-    private static async Task<Document> ApplyAsync(Document document, ImmutableArray<Diagnostic> diagnostics, CancellationToken cancellationToken)
+    private static async Task<Document> ApplyAsync(FixSource source, ImmutableArray<Diagnostic> diagnostics, CancellationToken cancellationToken)
     {
-        var root = await document.GetSyntaxRootAsync(cancellationToken).ConfigureAwait(false);
-        if (root is null)
+        var plans = diagnostics.Select(d => CounterpartPlan.Create(source, d, cancellationToken)).Where(p => p is not null).Cast<CounterpartPlan>().ToList();
+        if (plans.Count == 0)
         {
-            return document;
+            return source.Document;
         }
 
-        var byWrite = new Dictionary<AssignmentExpressionSyntax, List<string>>();
-        foreach (var diagnostic in diagnostics)
+        // One new local per (local, shift), however many writes use it; names unique across the batch.
+        var taken = new HashSet<string>(System.StringComparer.Ordinal);
+        var localNames = new Dictionary<(VariableDeclaratorSyntax, string), string>();
+        var inserted = new Dictionary<LocalDeclarationStatementSyntax, List<StatementSyntax>>();
+        var addendsByWrite = new Dictionary<AssignmentExpressionSyntax, List<string>>();
+        foreach (var plan in plans)
         {
-            var plan = Plan(root, diagnostic);
-            if (plan is null)
+            string name = string.Empty;
+            if (plan.NewLocal is { } local)
             {
-                continue;
+                if (!localNames.TryGetValue((local.Declarator, local.ShiftKey), out name!))
+                {
+                    name = LocalNames.Unique(local.Statement, local.PreferredName, taken);
+                    localNames[(local.Declarator, local.ShiftKey)] = name;
+                    if (!inserted.TryGetValue(local.Statement, out var list))
+                    {
+                        inserted[local.Statement] = list = new List<StatementSyntax>();
+                    }
+
+                    list.Add(SyntaxFactory.ParseStatement(local.TypeText + " " + name + " = " + local.Initializer + ";")
+                        .WithLeadingTrivia(local.Statement.GetLeadingTrivia())
+                        .WithTrailingTrivia(local.Statement.GetTrailingTrivia())
+                        .WithAdditionalAnnotations(Formatter.Annotation));
+                }
             }
 
-            if (!byWrite.TryGetValue(plan.Value.Write, out var addends))
+            if (!addendsByWrite.TryGetValue(plan.Write, out var addends))
             {
-                byWrite[plan.Value.Write] = addends = new List<string>();
+                addendsByWrite[plan.Write] = addends = new List<string>();
             }
 
-            addends.Add(plan.Value.Addend);
+            // A whole-state write gets one diagnostic per component, all with the same counterpart: add it once.
+            string addend = plan.Addend(name);
+            if (!addends.Contains(addend))
+            {
+                addends.Add(addend);
+            }
         }
 
-        var newRoot = root.ReplaceNodes(byWrite.Keys, (original, _) =>
+        var editor = await DocumentEditor.CreateAsync(source.Document, cancellationToken).ConfigureAwait(false);
+        foreach (var pair in addendsByWrite)
         {
-            bool subtract = original.IsKind(SyntaxKind.SubtractAssignmentExpression);
-            var right = original.Right;
-            string rightText = NeedsParentheses(right) ? "(" + right.WithoutTrivia() + ")" : right.WithoutTrivia().ToString();
-            foreach (var addend in byWrite[original])
-            {
-                rightText += " " + (subtract ? Flip(addend) : addend);
-            }
+            editor.ReplaceNode(pair.Key, Extended(pair.Key, pair.Value));
+        }
 
-            var newRight = SyntaxFactory.ParseExpression(rightText).WithTriviaFrom(right).WithAdditionalAnnotations(Formatter.Annotation);
-            return original.WithRight(newRight);
-        });
-        return document.WithSyntaxRoot(newRoot);
+        foreach (var pair in inserted)
+        {
+            editor.InsertAfter(pair.Key, pair.Value);
+        }
+
+        return editor.GetChangedDocument();
     }
 
-    /// <summary>The write to extend and the C# addend, or null when the fix cannot be made faithfully.</summary>
-    private static (AssignmentExpressionSyntax Write, string Addend)? Plan(SyntaxNode root, Diagnostic diagnostic)
+    private static AssignmentExpressionSyntax Extended(AssignmentExpressionSyntax write, IEnumerable<string> addends)
     {
-        if (!diagnostic.Properties.ContainsKey(FindingPropertyNames.SingleFactor)
-            || !diagnostic.Properties.TryGetValue(FindingPropertyNames.CounterpartTemplate, out var template) || template is null
-            || LoopShift.Parse(diagnostic.Properties.TryGetValue(FindingPropertyNames.CounterpartShift, out var s) ? s : null) is not { } shift
-            || FixLocations.Write(root, diagnostic) is not { } write
-            || !(write.IsKind(SyntaxKind.SimpleAssignmentExpression) || write.IsKind(SyntaxKind.AddAssignmentExpression) || write.IsKind(SyntaxKind.SubtractAssignmentExpression)))
+        bool subtract = write.IsKind(SyntaxKind.SubtractAssignmentExpression);
+        var right = write.Right;
+        string rightText = NeedsParentheses(right) ? "(" + right.WithoutTrivia() + ")" : right.WithoutTrivia().ToString();
+        foreach (var addend in addends)
         {
-            return null;
+            rightText += " " + (subtract ? Flip(addend) : addend);
         }
 
-        if (root.FindNode(diagnostic.Location.SourceSpan, findInsideTrivia: false, getInnermostNodeForTie: true) is not ExpressionSyntax term
-            || !write.Right.Span.Contains(term.Span))
-        {
-            // The term lives in a local inlined into the write: shifting its text there would not shift the local.
-            return null;
-        }
-
-        string shifted = LoopShift.Apply(term, shift).ToString();
-        return (write, template.Replace("§", shifted));
+        var newRight = SyntaxFactory.ParseExpression(rightText).WithTriviaFrom(right).WithAdditionalAnnotations(Formatter.Annotation);
+        return write.WithRight(newRight);
     }
 
     private static bool NeedsParentheses(ExpressionSyntax e) =>

@@ -8,4 +8,6 @@ internal static class EquivalenceKeys
     public const string AddOppositeUpdate = "FVC0004.AddOppositeUpdate";
 
     public const string ReadOldStateFromCopy = "FVC0005.ReadOldStateFromCopy";
+
+    public const string TwoPassFaceFlux = "FVC0005.TwoPassFaceFlux";
 }

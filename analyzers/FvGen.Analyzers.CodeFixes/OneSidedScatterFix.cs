@@ -1,5 +1,6 @@
-using System.Collections.Immutable;
+using System.Collections.Generic;
 using System.Composition;
+using System.Linq;
 using System.Threading;
 using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
@@ -15,35 +16,29 @@ namespace FvGen.Analyzers.CodeFixes;
 /// <summary>FVC0004: adds the missing opposite update for the other cell of the face, right after the write.</summary>
 [ExportCodeFixProvider(LanguageNames.CSharp, Name = nameof(OneSidedScatterFix))]
 [Shared]
-public sealed class OneSidedScatterFix : CodeFixProvider
+public sealed class OneSidedScatterFix : FindingFix
 {
-    public override ImmutableArray<string> FixableDiagnosticIds => ImmutableArray.Create(DiagnosticIds.OneSidedScatter);
+    public OneSidedScatterFix()
+        : base(DiagnosticIds.OneSidedScatter)
+    {
+    }
 
     public override FixAllProvider GetFixAllProvider() => WellKnownFixAllProviders.BatchFixer;
 
-    public override async Task RegisterCodeFixesAsync(CodeFixContext context)
+    private protected override IEnumerable<CodeAction> Offer(FixSource source, Diagnostic diagnostic, CancellationToken cancellationToken)
     {
-        var root = await context.Document.GetSyntaxRootAsync(context.CancellationToken).ConfigureAwait(false);
-        if (root is null)
+        if (Plan(source, diagnostic) is not { } plan)
         {
-            return;
+            return Enumerable.Empty<CodeAction>();
         }
 
-        foreach (var diagnostic in context.Diagnostics)
+        return new[]
         {
-            var plan = Plan(root, diagnostic);
-            if (plan is null)
-            {
-                continue;
-            }
-
-            context.RegisterCodeFix(
-                CodeAction.Create(
-                    "Add the opposite update `" + plan.Value.Added + "`",
-                    ct => ApplyAsync(context.Document, plan.Value.Statement, plan.Value.Added, ct),
-                    EquivalenceKeys.AddOppositeUpdate),
-                diagnostic);
-        }
+            CodeAction.Create(
+                "Add the opposite update `" + plan.Added + "`",
+                ct => ApplyAsync(source.Document, plan.Statement, plan.Added, ct),
+                EquivalenceKeys.AddOppositeUpdate),
+        };
     }
 
     private static async Task<Document> ApplyAsync(Document document, StatementSyntax after, string added, CancellationToken cancellationToken)
@@ -57,10 +52,10 @@ public sealed class OneSidedScatterFix : CodeFixProvider
         return editor.GetChangedDocument();
     }
 
-    private static (StatementSyntax Statement, string Added)? Plan(SyntaxNode root, Diagnostic diagnostic)
+    private static (StatementSyntax Statement, string Added)? Plan(FixSource source, Diagnostic diagnostic)
     {
         if (!diagnostic.Properties.TryGetValue(FindingPropertyNames.OppositeTarget, out var target) || string.IsNullOrEmpty(target)
-            || FixLocations.Write(root, diagnostic) is not { } write
+            || source.WriteOf(diagnostic) is not { } write
             || write.Parent is not ExpressionStatementSyntax statement
             || statement.Parent is not BlockSyntax)
         {
