@@ -89,6 +89,10 @@ internal sealed class OldStateCopy
             .WithTrailingTrivia(endOfLine)
             .WithAdditionalAnnotations(Formatter.Annotation);
         editor.InsertBefore(_loop, copy);
+
+        // The copy takes the loop's leading trivia (a blank line or comment above it); the loop keeps only its indentation.
+        var indent = SyntaxFactory.TriviaList(_loop.GetLeadingTrivia().Reverse().TakeWhile(t => !t.IsKind(SyntaxKind.EndOfLineTrivia)).Reverse());
+        editor.ReplaceNode(_loop, (current, _) => current.WithLeadingTrivia(indent));
         return editor.GetChangedDocument();
     }
 }

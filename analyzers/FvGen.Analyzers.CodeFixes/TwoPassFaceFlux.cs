@@ -6,7 +6,6 @@ using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
-using Microsoft.CodeAnalysis.Editing;
 using Microsoft.CodeAnalysis.Formatting;
 
 namespace FvGen.Analyzers.CodeFixes;
@@ -89,28 +88,35 @@ internal sealed class TwoPassFaceFlux
 
     public async Task<Document> ApplyAsync(Document document, CancellationToken cancellationToken)
     {
-        var editor = await DocumentEditor.CreateAsync(document, cancellationToken).ConfigureAwait(false);
-        editor.ReplaceNode(_east, SyntaxFactory.ParseExpression(BufferName + "[" + _index + " + 1]").WithTriviaFrom(_east));
-        editor.ReplaceNode(_west, SyntaxFactory.ParseExpression(BufferName + "[" + _index + "]").WithTriviaFrom(_west));
+        var root = await document.GetSyntaxRootAsync(cancellationToken).ConfigureAwait(false);
+        if (root is null || _loop.Parent is not BlockSyntax block)
+        {
+            return document;
+        }
 
-        var leading = _loop.GetLeadingTrivia();
-        var endOfLine = _loop.GetTrailingTrivia().FirstOrDefault(t => t.IsKind(SyntaxKind.EndOfLineTrivia));
+        var endOfLine = root.DescendantTrivia().FirstOrDefault(t => t.IsKind(SyntaxKind.EndOfLineTrivia));
         if (endOfLine == default)
         {
             endOfLine = SyntaxFactory.LineFeed;
         }
 
+        // The user's own trivia (a comment above the loop, say) goes above the whole two-pass form; the cell loop keeps its indentation after a blank line.
+        var leading = _loop.GetLeadingTrivia();
+        var indent = SyntaxFactory.TriviaList(leading.Reverse().TakeWhile(t => !t.IsKind(SyntaxKind.EndOfLineTrivia)).Reverse());
         string comment = "// " + BufferName + "[" + _index + "]: the face between cells " + _index + " - 1 and " + _index + ", from the old state.";
         var bufferDeclaration = SyntaxFactory.ParseStatement(_bufferDeclaration)
-            .WithLeadingTrivia(leading.AddRange(new[] { SyntaxFactory.Comment(comment), endOfLine }).AddRange(leading.Where(t => t.IsKind(SyntaxKind.WhitespaceTrivia))))
+            .WithLeadingTrivia(leading.Add(SyntaxFactory.Comment(comment)).Add(endOfLine).AddRange(indent))
             .WithTrailingTrivia(endOfLine)
             .WithAdditionalAnnotations(Formatter.Annotation);
         var bufferLoop = SyntaxFactory.ParseStatement(_bufferLoop.Replace("\n", endOfLine.ToFullString()))
-            .WithLeadingTrivia(leading)
-            .WithTrailingTrivia(endOfLine, endOfLine)
+            .WithLeadingTrivia(indent)
+            .WithTrailingTrivia(endOfLine)
             .WithAdditionalAnnotations(Formatter.Annotation);
-        editor.InsertBefore(_loop, new[] { bufferDeclaration, bufferLoop });
-        return editor.GetChangedDocument();
+        var cellLoop = _loop
+            .ReplaceNodes(new[] { _east, _west }, (original, _) => SyntaxFactory.ParseExpression(BufferName + "[" + _index + (original == _east ? " + 1]" : "]")).WithTriviaFrom(original))
+            .WithLeadingTrivia(SyntaxFactory.TriviaList(endOfLine).AddRange(indent));
+        var newBlock = block.ReplaceNode(_loop, new SyntaxNode[] { bufferDeclaration, bufferLoop, cellLoop });
+        return document.WithSyntaxRoot(root.ReplaceNode(block, newBlock));
     }
 
     /// <summary>The two faces of a difference <c>E − W</c> (or <c>W − E</c>) whose east term is the west term one cell up.</summary>

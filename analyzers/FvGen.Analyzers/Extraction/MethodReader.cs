@@ -259,7 +259,8 @@ internal static class MethodReader
                 continue;
             }
 
-            var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Differenced), System.StringComparer.Ordinal);
+            // A later loop that writes the array it differences sweeps it in place: it does not read face data.
+            var readLater = new HashSet<string>(accesses.Skip(k + 1).SelectMany(a => a.Differenced.Where(d => !a.Written.Contains(d))), System.StringComparer.Ordinal);
             readLater.UnionWith(readByDefinitions);
             if (written.All(readLater.Contains) && !written.Any(read.Contains))
             {

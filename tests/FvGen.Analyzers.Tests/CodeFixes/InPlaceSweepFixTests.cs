@@ -1,3 +1,6 @@
+using FvGen.Analyzers.CodeFixes;
+using FvGen.Analyzers.Tests.Harness;
+using FvGen.Analyzers.Tests.Verifiers;
 using Microsoft.CodeAnalysis.Testing;
 using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.Rules.InPlaceSweepAnalyzer, FvGen.Analyzers.CodeFixes.InPlaceSweepFix>;
 
@@ -68,4 +71,290 @@ public sealed class InPlaceSweepFixTests
                 }
             }
             """);
+
+    private static DiagnosticResult Swept(int location) =>
+        VerifyCS.Diagnostic(DiagnosticIds.InPlaceSweep).WithLocation(location).WithOptions(DiagnosticOptions.IgnoreAdditionalLocations).WithMessage(null);
+
+    /// <summary>The fixed kernel must be clean for every conservation rule, not only for FVC0005.</summary>
+    private static async Task AssertCleanAsync(string fixedSource)
+    {
+        var run = await AnalyzerRun.RunAsync(TestReferences.Usings + fixedSource);
+        Assert.Empty(run.CompilerErrors);
+        Assert.Empty(run.Exceptions);
+        Assert.True(!run.Fvc.Any(), AnalyzerRun.Describe(run.Fvc));
+    }
+
+    private const string GodunovSweep = """
+        static class Burgers
+        {
+            static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+            [ConservativeUpdate]
+            public static void Step(double[] u, double c)
+            {
+                for (int i = 1; i < u.Length - 1; i++)
+                {
+                    {|#0:u[i] = u[i] - c * (Godunov(u[i], u[i + 1]) - Godunov(u[i - 1], u[i]))|};
+                }
+            }
+        }
+        """;
+
+    private const string GodunovTwoPass = """
+        static class Burgers
+        {
+            static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+            [ConservativeUpdate]
+            public static void Step(double[] u, double c)
+            {
+                // flux[i]: the face between cells i - 1 and i, from the old state.
+                var flux = new double[u.Length + 1];
+                for (int i = 1; i < u.Length; i++)
+                {
+                    flux[i] = Godunov(u[i - 1], u[i]);
+                }
+
+                for (int i = 1; i < u.Length - 1; i++)
+                {
+                    u[i] = u[i] - c * (flux[i + 1] - flux[i]);
+                }
+            }
+        }
+        """;
+
+    [Fact]
+    public async Task FluxCallSweepBecomesTheTwoPassFaceFluxForm()
+    {
+        await VerifyCS.VerifyCodeFixAsync(GodunovSweep, [Swept(0)], GodunovTwoPass, equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(GodunovTwoPass);
+    }
+
+    [Fact]
+    public Task TheCopyStaysTheFirstActionForTheSameSweep() =>
+        VerifyCS.VerifyCodeFixAsync(
+            GodunovSweep,
+            [Swept(0)],
+            GodunovSweep.Replace("{|#0:", string.Empty).Replace("|};", ";")
+                .Replace("        for (int i = 1; i < u.Length - 1; i++)", "        var uOld = (double[])u.Clone();\n        for (int i = 1; i < u.Length - 1; i++)")
+                .Replace("u[i] = u[i] - c * (Godunov(u[i], u[i + 1]) - Godunov(u[i - 1], u[i]))", "u[i] = uOld[i] - c * (Godunov(uOld[i], uOld[i + 1]) - Godunov(uOld[i - 1], uOld[i]))"),
+            equivalenceKey: EquivalenceKeys.ReadOldStateFromCopy);
+
+    [Fact]
+    public async Task AveragedFaceExpressionOnASpanWithInclusiveBoundKeepsEveryFace()
+    {
+        // Cells 1 … n − 2 touch faces 1 … n − 1: the buffer loop runs one face further than the cell loop.
+        const string fixedSource = """
+            static class Smooth
+            {
+                [ConservativeUpdate]
+                public static void Step(Span<double> u, int n, double c)
+                {
+                    // flux[i]: the face between cells i - 1 and i, from the old state.
+                    var flux = new double[u.Length + 1];
+                    for (int i = 1; i <= n - 1; i++)
+                    {
+                        flux[i] = 0.5 * (u[i - 1] + u[i]);
+                    }
+
+                    for (int i = 1; i <= n - 2; i++)
+                        u[i] -= c * (flux[i + 1] - flux[i]);
+                }
+            }
+            """;
+        await VerifyCS.VerifyCodeFixAsync(
+            """
+            static class Smooth
+            {
+                [ConservativeUpdate]
+                public static void Step(Span<double> u, int n, double c)
+                {
+                    for (int i = 1; i <= n - 2; i++)
+                        {|#0:u[i] -= c * (0.5 * (u[i] + u[i + 1]) - 0.5 * (u[i - 1] + u[i]))|};
+                }
+            }
+            """,
+            [Swept(0)],
+            fixedSource,
+            equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(fixedSource);
+    }
+
+    [Fact]
+    public async Task WestMinusEastOrderIsKept()
+    {
+        const string fixedSource = """
+            static class Burgers
+            {
+                static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+                [ConservativeUpdate]
+                public static void Step(double[] u, double c)
+                {
+                    // flux[i]: the face between cells i - 1 and i, from the old state.
+                    var flux = new double[u.Length + 1];
+                    for (int i = 2; i < u.Length - 1; ++i)
+                    {
+                        flux[i] = Godunov(u[i - 1], u[i]);
+                    }
+
+                    for (int i = 2; i < u.Length - 2; ++i)
+                    {
+                        u[i] += c * (flux[i] - flux[i + 1]);
+                    }
+                }
+            }
+            """;
+        await VerifyCS.VerifyCodeFixAsync(
+            """
+            static class Burgers
+            {
+                static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+                [ConservativeUpdate]
+                public static void Step(double[] u, double c)
+                {
+                    for (int i = 2; i < u.Length - 2; ++i)
+                    {
+                        {|#0:u[i] += c * (Godunov(u[i - 1], u[i]) - Godunov(u[i], u[i + 1]))|};
+                    }
+                }
+            }
+            """,
+            [Swept(0)],
+            fixedSource,
+            equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(fixedSource);
+    }
+
+    [Fact]
+    public Task UpwindDifferenceOfCellValuesGetsNoTwoPassForm()
+    {
+        // `u[i] - u[i - 1]` is a difference of cells, not of face fluxes of two cells: only the copy applies.
+        const string source = """
+            static class Upwind
+            {
+                [ConservativeUpdate]
+                public static void Step(double[] u, double c)
+                {
+                    for (int i = 1; i < u.Length; i++)
+                    {
+                        {|#0:u[i] = u[i] - c * (u[i] - u[i - 1])|};
+                    }
+                }
+            }
+            """;
+        return VerifyCS.VerifyCodeFixAsync(source, [Swept(0)], source, remaining: [Swept(0)], equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+    }
+
+    [Fact]
+    public Task ExtraNeighbourReadOutsideTheFacesGetsNoTwoPassForm()
+    {
+        const string source = """
+            static class Burgers
+            {
+                static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+                [ConservativeUpdate]
+                public static void Step(double[] u, double c)
+                {
+                    for (int i = 1; i < u.Length - 1; i++)
+                    {
+                        {|#0:u[i] = u[i + 1] - c * (Godunov(u[i], u[i + 1]) - Godunov(u[i - 1], u[i]))|};
+                    }
+                }
+            }
+            """;
+        return VerifyCS.VerifyCodeFixAsync(source, [Swept(0)], source, remaining: [Swept(0)], equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+    }
+
+    private const string TwoStages = """
+        static class Burgers
+        {
+            static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+            [ConservativeUpdate]
+            public static void TwoSteps(double[] u, double c)
+            {
+                for (int i = 1; i < u.Length - 1; i++)
+                {
+                    {|#0:u[i] = u[i] - c * (Godunov(u[i], u[i + 1]) - Godunov(u[i - 1], u[i]))|};
+                }
+
+                for (int i = 1; i < u.Length - 1; i++)
+                {
+                    {|#1:u[i] = u[i] - c * (Godunov(u[i], u[i + 1]) - Godunov(u[i - 1], u[i]))|};
+                }
+            }
+        }
+        """;
+
+    [Fact]
+    public async Task FixAllGivesEachSweepItsOwnBuffer()
+    {
+        const string fixedSource = """
+            static class Burgers
+            {
+                static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+                [ConservativeUpdate]
+                public static void TwoSteps(double[] u, double c)
+                {
+                    // flux[i]: the face between cells i - 1 and i, from the old state.
+                    var flux = new double[u.Length + 1];
+                    for (int i = 1; i < u.Length; i++)
+                    {
+                        flux[i] = Godunov(u[i - 1], u[i]);
+                    }
+
+                    for (int i = 1; i < u.Length - 1; i++)
+                    {
+                        u[i] = u[i] - c * (flux[i + 1] - flux[i]);
+                    }
+
+                    // flux2[i]: the face between cells i - 1 and i, from the old state.
+                    var flux2 = new double[u.Length + 1];
+                    for (int i = 1; i < u.Length; i++)
+                    {
+                        flux2[i] = Godunov(u[i - 1], u[i]);
+                    }
+
+                    for (int i = 1; i < u.Length - 1; i++)
+                    {
+                        u[i] = u[i] - c * (flux2[i + 1] - flux2[i]);
+                    }
+                }
+            }
+            """;
+        await VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, batchFixedSource: fixedSource, equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(fixedSource);
+    }
+
+    [Fact]
+    public Task FixAllGivesEachSweepItsOwnCopy()
+    {
+        const string fixedSource = """
+            static class Burgers
+            {
+                static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+                [ConservativeUpdate]
+                public static void TwoSteps(double[] u, double c)
+                {
+                    var uOld = (double[])u.Clone();
+                    for (int i = 1; i < u.Length - 1; i++)
+                    {
+                        u[i] = uOld[i] - c * (Godunov(uOld[i], uOld[i + 1]) - Godunov(uOld[i - 1], uOld[i]));
+                    }
+
+                    var uOld2 = (double[])u.Clone();
+                    for (int i = 1; i < u.Length - 1; i++)
+                    {
+                        u[i] = uOld2[i] - c * (Godunov(uOld2[i], uOld2[i + 1]) - Godunov(uOld2[i - 1], uOld2[i]));
+                    }
+                }
+            }
+            """;
+        return VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, batchFixedSource: fixedSource, equivalenceKey: EquivalenceKeys.ReadOldStateFromCopy);
+    }
 }

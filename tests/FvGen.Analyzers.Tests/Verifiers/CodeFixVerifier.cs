@@ -5,20 +5,21 @@ using Microsoft.CodeAnalysis.Testing;
 
 namespace FvGen.Analyzers.Tests.Verifiers;
 
-/// <summary>Verifies a rule and its fix: diagnostics in the source, the fixed source, and optionally the fix-all result.</summary>
+/// <summary>Verifies a rule and its fix: diagnostics in the source, the fixed source, and optionally the fix-all result and which of several actions (by equivalence key).</summary>
 internal static class CodeFixVerifier<TAnalyzer, TCodeFix>
     where TAnalyzer : DiagnosticAnalyzer, new()
     where TCodeFix : CodeFixProvider, new()
 {
     public static DiagnosticResult Diagnostic(string id) => AnalyzerVerifier<TAnalyzer>.Diagnostic(id);
 
-    public static async Task VerifyCodeFixAsync(string source, DiagnosticResult[] expected, string fixedSource, string? batchFixedSource = null, DiagnosticResult[]? remaining = null)
+    public static async Task VerifyCodeFixAsync(string source, DiagnosticResult[] expected, string fixedSource, string? batchFixedSource = null, DiagnosticResult[]? remaining = null, string? equivalenceKey = null)
     {
         var test = new CSharpCodeFixTest<TAnalyzer, TCodeFix, DefaultVerifier>
         {
             TestCode = TestReferences.Usings + source,
             FixedCode = TestReferences.Usings + fixedSource,
             ReferenceAssemblies = TestReferences.Assemblies,
+            CodeActionEquivalenceKey = equivalenceKey,
         };
         if (batchFixedSource is not null)
         {
