@@ -43,7 +43,7 @@ public sealed class InPlaceSweepFix : FindingFix
         if (TwoPassFaceFlux.Create(source, write, cancellationToken) is { } twoPass)
         {
             yield return CodeAction.Create(
-                "Compute each face flux once into `" + twoPass.BufferName + "` first, then update in place",
+                "Compute each face flux once into `" + twoPass.BufferNames + "` first, then update in place",
                 ct => twoPass.ApplyAsync(source.Document, ct),
                 EquivalenceKeys.TwoPassFaceFlux);
         }

@@ -1,6 +1,7 @@
 using System.Collections.Generic;
 using System.Globalization;
 using System.Linq;
+using System.Text;
 using System.Threading;
 using System.Threading.Tasks;
 using Microsoft.CodeAnalysis;
@@ -11,85 +12,121 @@ using Microsoft.CodeAnalysis.Formatting;
 namespace FvGen.Analyzers.CodeFixes;
 
 /// <summary>
-/// FVC0005, second form: the two-pass face-flux update. For a 1-D cell loop
+/// FVC0005, second form: the two-pass face-flux update. For a cell loop
 /// <c>u[i] = u[i] - c * (F(u[i], u[i + 1]) - F(u[i - 1], u[i]))</c> it first fills a face buffer from
-/// the old state, <c>flux[k] = F(u[k - 1], u[k])</c> for every face the cells touch (each face once),
-/// then updates in place from the buffer: <c>u[i] = u[i] - c * (flux[i + 1] - flux[i])</c>.
-/// Offered only for that shape: one write of <c>u[i]</c> in a counted <c>for</c>, one face
-/// difference whose two terms are the same expression of two neighbouring cells one cell apart, and
-/// no other read of <c>u</c> but <c>u[i]</c>.
+/// the old state, <c>flux[i] = F(u[i - 1], u[i])</c> for every face the cells touch (each face once),
+/// then updates in place from the buffer: <c>u[i] = u[i] - c * (flux[i + 1] - flux[i])</c>. On a
+/// rectangular array (<c>u[i, j]</c> in a <c>j</c>/<c>i</c> nest) each direction gets its own buffer
+/// (<c>fluxX</c>, <c>fluxY</c>), one face longer in its own direction.
+/// Offered only for that shape: one write of <c>u[i, …]</c> alone in a nest of counted <c>for</c>
+/// loops over its subscripts, exactly one face difference per direction whose two terms are the same
+/// expression of two neighbouring cells one cell apart, and no other read of <c>u</c> but the written cell.
 /// </summary>
 internal sealed class TwoPassFaceFlux
 {
-    private readonly ForStatementSyntax _loop;
-    private readonly ExpressionSyntax _east;
-    private readonly ExpressionSyntax _west;
-    private readonly string _bufferDeclaration;
-    private readonly string _bufferLoop;
-    private readonly string _index;
+    private static readonly string[] Axes = { "X", "Y", "Z" };
 
-    private TwoPassFaceFlux(ForStatementSyntax loop, ExpressionSyntax east, ExpressionSyntax west, string bufferName, string bufferDeclaration, string bufferLoop, string index)
+    private readonly ForStatementSyntax _outermost;
+    private readonly IReadOnlyList<Direction> _directions;
+    private readonly IReadOnlyList<string> _subscripts;
+    private readonly IReadOnlyList<ForStatementSyntax> _nest;
+    private readonly string _elementType;
+    private readonly string _array;
+    private readonly bool _oneDimensional;
+
+    private TwoPassFaceFlux(ForStatementSyntax outermost, IReadOnlyList<ForStatementSyntax> nest, IReadOnlyList<string> subscripts, IReadOnlyList<Direction> directions, string elementType, string array, bool oneDimensional)
     {
-        _loop = loop;
-        _east = east;
-        _west = west;
-        BufferName = bufferName;
-        _bufferDeclaration = bufferDeclaration;
-        _bufferLoop = bufferLoop;
-        _index = index;
+        _outermost = outermost;
+        _nest = nest;
+        _subscripts = subscripts;
+        _directions = directions;
+        _elementType = elementType;
+        _array = array;
+        _oneDimensional = oneDimensional;
     }
 
-    public string BufferName { get; }
+    /// <summary>The buffer names, for the action's title.</summary>
+    public string BufferNames => string.Join("`, `", _directions.Select(d => d.Buffer));
+
+    /// <summary>One direction's face difference: east and west terms as written, and the west term without parentheses.</summary>
+    private sealed record Direction(int Position, ExpressionSyntax East, ExpressionSyntax West, ExpressionSyntax WestCore, string Buffer);
 
     public static TwoPassFaceFlux? Create(FixSource source, AssignmentExpressionSyntax write, CancellationToken cancellationToken)
     {
-        if (write.Left is not ElementAccessExpressionSyntax { Expression: IdentifierNameSyntax array, ArgumentList.Arguments: { Count: 1 } arguments }
-            || arguments[0].Expression is not IdentifierNameSyntax index
-            || write.Parent is not ExpressionStatementSyntax statement
-            || (statement.Parent is BlockSyntax { Statements.Count: 1 } body ? body.Parent : statement.Parent) is not ForStatementSyntax loop
-            || loop.Parent is not BlockSyntax
-            || !IsCountedLoop(loop, index.Identifier.ValueText, out var condition))
+        if (write.Left is not ElementAccessExpressionSyntax { Expression: IdentifierNameSyntax array } target
+            || target.ArgumentList.Arguments.Count is < 1 or > 3
+            || target.ArgumentList.Arguments.Any(a => a.Expression is not IdentifierNameSyntax)
+            || write.Parent is not ExpressionStatementSyntax statement)
         {
             return null;
         }
 
-        string i = index.Identifier.ValueText;
+        var subscripts = target.ArgumentList.Arguments.Select(a => ((IdentifierNameSyntax)a.Expression).Identifier.ValueText).ToList();
+        if (subscripts.Distinct().Count() != subscripts.Count || Nest(statement, subscripts) is not { } nest || nest[0].Parent is not BlockSyntax)
+        {
+            return null;
+        }
+
         string u = array.Identifier.ValueText;
-        var up = new Dictionary<string, long>(System.StringComparer.Ordinal) { [i] = 1 };
-        var faces = write.Right.DescendantNodesAndSelf().OfType<BinaryExpressionSyntax>()
-            .Where(b => b.IsKind(SyntaxKind.SubtractExpression))
-            .Select(b => FaceDifference(b, up))
-            .Where(f => f is not null)
-            .Select(f => f!.Value)
-            .ToList();
-        if (faces.Count != 1)
-        {
-            return null;
-        }
-
-        var (east, west, westCore) = faces[0];
         var model = source.Model;
-        if (!Offsets(westCore, u, i).SetEquals(new long?[] { -1, 0 })
-            || write.Right.DescendantNodesAndSelf().OfType<ElementAccessExpressionSyntax>()
-                .Any(e => IsRead(e, u) && !east.Span.Contains(e.Span) && !west.Span.Contains(e.Span) && Offset(e, i) != 0)
-            || !ShiftSafety.CanShift(westCore, up, model, cancellationToken)
-            || model.GetTypeInfo(westCore, cancellationToken).Type is not { TypeKind: not TypeKind.Error } fluxType
-            || model.GetTypeInfo(array, cancellationToken).Type is not (IArrayTypeSymbol { Rank: 1 } or INamedTypeSymbol { Name: "Span" or "ReadOnlySpan" }))
+        bool oneDimensional = subscripts.Count == 1;
+        var arrayType = model.GetTypeInfo(array, cancellationToken).Type;
+        if (!(arrayType is IArrayTypeSymbol rectangular && rectangular.Rank == subscripts.Count
+              || oneDimensional && arrayType is INamedTypeSymbol { Name: "Span" or "ReadOnlySpan" }))
         {
             return null;
         }
 
-        string buffer = LocalNames.Unique(loop, "flux");
-        string declaration = "var " + buffer + " = new " + fluxType.ToMinimalDisplayString(model, loop.SpanStart) + "[" + u + ".Length + 1];";
-        string header = "for (" + loop.Declaration!.WithoutTrivia() + "; " + i + " " + condition.OperatorToken.Text + " " + PlusOne(condition.Right) + "; " + loop.Incrementors[0].WithoutTrivia() + ")";
-        string fill = header + "\n{\n    " + buffer + "[" + i + "] = " + westCore.WithoutTrivia() + ";\n}";
-        return new TwoPassFaceFlux(loop, east, west, buffer, declaration, fill, i);
+        var directions = new List<Direction>();
+        ITypeSymbol? fluxType = null;
+        var taken = new HashSet<string>(System.StringComparer.Ordinal);
+        for (int p = 0; p < subscripts.Count; p++)
+        {
+            var up = new Dictionary<string, long>(System.StringComparer.Ordinal) { [subscripts[p]] = 1 };
+            var faces = write.Right.DescendantNodesAndSelf().OfType<BinaryExpressionSyntax>()
+                .Where(b => b.IsKind(SyntaxKind.SubtractExpression))
+                .Select(b => FaceDifference(b, up))
+                .Where(f => f is not null)
+                .Select(f => f!.Value)
+                .ToList();
+            if (faces.Count != 1)
+            {
+                return null;
+            }
+
+            var (east, west, westCore) = faces[0];
+            var reads = westCore.DescendantNodesAndSelf().OfType<ElementAccessExpressionSyntax>().Where(e => IsRead(e, u)).ToList();
+            var along = new HashSet<long?>(reads.Select(e => Offset(e, p, subscripts)));
+            if (!along.SetEquals(new long?[] { -1, 0 })
+                || reads.Any(e => Enumerable.Range(0, subscripts.Count).Any(q => q != p && Offset(e, q, subscripts) != 0))
+                || !ShiftSafety.CanShift(westCore, up, model, cancellationToken)
+                || model.GetTypeInfo(westCore, cancellationToken).Type is not { TypeKind: not TypeKind.Error } type
+                || (fluxType is not null && !SymbolEqualityComparer.Default.Equals(fluxType, type)))
+            {
+                return null;
+            }
+
+            fluxType = type;
+            string buffer = LocalNames.Unique(nest[0], oneDimensional ? "flux" : "flux" + Axes[p], taken);
+            directions.Add(new Direction(p, east, west, westCore, buffer));
+        }
+
+        // Outside the face differences the update may read only the cell it writes.
+        bool InFace(SyntaxNode n) => directions.Any(d => d.East.Span.Contains(n.Span) || d.West.Span.Contains(n.Span));
+        if (fluxType is null
+            || write.Right.DescendantNodesAndSelf().OfType<ElementAccessExpressionSyntax>()
+                .Any(e => IsRead(e, u) && !InFace(e) && Enumerable.Range(0, subscripts.Count).Any(q => Offset(e, q, subscripts) != 0)))
+        {
+            return null;
+        }
+
+        return new TwoPassFaceFlux(nest[0], nest, subscripts, directions, fluxType.ToMinimalDisplayString(model, nest[0].SpanStart), u, oneDimensional);
     }
 
     public async Task<Document> ApplyAsync(Document document, CancellationToken cancellationToken)
     {
         var root = await document.GetSyntaxRootAsync(cancellationToken).ConfigureAwait(false);
-        if (root is null || _loop.Parent is not BlockSyntax block)
+        if (root is null || _outermost.Parent is not BlockSyntax block)
         {
             return document;
         }
@@ -101,22 +138,101 @@ internal sealed class TwoPassFaceFlux
         }
 
         // The user's own trivia (a comment above the loop, say) goes above the whole two-pass form; the cell loop keeps its indentation after a blank line.
-        var leading = _loop.GetLeadingTrivia();
+        var leading = _outermost.GetLeadingTrivia();
         var indent = SyntaxFactory.TriviaList(leading.Reverse().TakeWhile(t => !t.IsKind(SyntaxKind.EndOfLineTrivia)).Reverse());
-        string comment = "// " + BufferName + "[" + _index + "]: the face between cells " + _index + " - 1 and " + _index + ", from the old state.";
-        var bufferDeclaration = SyntaxFactory.ParseStatement(_bufferDeclaration)
-            .WithLeadingTrivia(leading.Add(SyntaxFactory.Comment(comment)).Add(endOfLine).AddRange(indent))
-            .WithTrailingTrivia(endOfLine)
-            .WithAdditionalAnnotations(Formatter.Annotation);
-        var bufferLoop = SyntaxFactory.ParseStatement(_bufferLoop.Replace("\n", endOfLine.ToFullString()))
-            .WithLeadingTrivia(indent)
-            .WithTrailingTrivia(endOfLine)
-            .WithAdditionalAnnotations(Formatter.Annotation);
-        var cellLoop = _loop
-            .ReplaceNodes(new[] { _east, _west }, (original, _) => SyntaxFactory.ParseExpression(BufferName + "[" + _index + (original == _east ? " + 1]" : "]")).WithTriviaFrom(original))
+        var statements = new List<SyntaxNode>();
+        foreach (var direction in _directions)
+        {
+            var first = statements.Count == 0 ? leading : SyntaxFactory.TriviaList(endOfLine).AddRange(indent);
+            var declaration = SyntaxFactory.ParseStatement("var " + direction.Buffer + " = new " + _elementType + "[" + Extents(direction.Position) + "];")
+                .WithLeadingTrivia(first.Add(SyntaxFactory.Comment(Comment(direction))).Add(endOfLine).AddRange(indent))
+                .WithTrailingTrivia(endOfLine)
+                .WithAdditionalAnnotations(Formatter.Annotation);
+            var fill = SyntaxFactory.ParseStatement(FillText(direction).Replace("\n", endOfLine.ToFullString()))
+                .WithLeadingTrivia(indent)
+                .WithTrailingTrivia(endOfLine)
+                .WithAdditionalAnnotations(Formatter.Annotation);
+            statements.Add(declaration);
+            statements.Add(fill);
+        }
+
+        var replacements = new Dictionary<SyntaxNode, string>();
+        foreach (var d in _directions)
+        {
+            replacements[d.East] = d.Buffer + "[" + Subscripts(d.Position, 1) + "]";
+            replacements[d.West] = d.Buffer + "[" + Subscripts(d.Position, 0) + "]";
+        }
+
+        var cellLoop = _outermost
+            .ReplaceNodes(replacements.Keys, (original, _) => SyntaxFactory.ParseExpression(replacements[original]).WithTriviaFrom(original))
             .WithLeadingTrivia(SyntaxFactory.TriviaList(endOfLine).AddRange(indent));
-        var newBlock = block.ReplaceNode(_loop, new SyntaxNode[] { bufferDeclaration, bufferLoop, cellLoop });
-        return document.WithSyntaxRoot(root.ReplaceNode(block, newBlock));
+        statements.Add(cellLoop);
+        return document.WithSyntaxRoot(root.ReplaceNode(block, block.ReplaceNode(_outermost, statements)));
+    }
+
+    /// <summary>The nest of counted loops, outermost first, whose variables are exactly the subscripts; null for any other shape.</summary>
+    private static List<ForStatementSyntax>? Nest(StatementSyntax statement, IReadOnlyList<string> subscripts)
+    {
+        var nest = new List<ForStatementSyntax>();
+        SyntaxNode inner = statement;
+        while (nest.Count < subscripts.Count)
+        {
+            var parent = inner.Parent is BlockSyntax { Statements.Count: 1 } body ? body.Parent : inner.Parent;
+            if (parent is not ForStatementSyntax loop || !IsCountedLoop(loop, out var variable) || !subscripts.Contains(variable) || nest.Any(l => Variable(l) == variable))
+            {
+                return null;
+            }
+
+            nest.Insert(0, loop);
+            inner = loop;
+        }
+
+        return nest;
+    }
+
+    private string Comment(Direction d)
+    {
+        string cellBehind = _oneDimensional ? _subscripts[0] + " - 1" : "(" + Subscripts(d.Position, -1) + ")";
+        string cell = _oneDimensional ? _subscripts[0] : "(" + Subscripts(d.Position, 0) + ")";
+        return "// " + d.Buffer + "[" + Subscripts(d.Position, 0) + "]: the face between cells " + cellBehind + " and " + cell + ", from the old state.";
+    }
+
+    /// <summary>The buffer's lengths: the cells' own, one more face in the direction's dimension.</summary>
+    private string Extents(int position) =>
+        _oneDimensional
+            ? _array + ".Length + 1"
+            : string.Join(", ", _subscripts.Select((_, q) => _array + ".GetLength(" + q.ToString(CultureInfo.InvariantCulture) + ")" + (q == position ? " + 1" : string.Empty)));
+
+    /// <summary>The written subscripts with the direction's one moved by <paramref name="offset"/>.</summary>
+    private string Subscripts(int position, int offset) =>
+        string.Join(", ", _subscripts.Select((s, q) => q != position || offset == 0 ? s : offset > 0 ? s + " + " + offset.ToString(CultureInfo.InvariantCulture) : s + " - " + (-offset).ToString(CultureInfo.InvariantCulture)));
+
+    /// <summary>The fill nest: the cell loops' headers, the direction's own bound one face further.</summary>
+    private string FillText(Direction d)
+    {
+        var text = new StringBuilder();
+        for (int level = 0; level < _nest.Count; level++)
+        {
+            var loop = _nest[level];
+            var condition = (BinaryExpressionSyntax)loop.Condition!;
+            string pad = new(' ', 4 * level);
+            string bound = Variable(loop) == _subscripts[d.Position] ? PlusOne(condition.Right) : condition.Right.WithoutTrivia().ToString();
+            text.Append(pad).Append("for (").Append(loop.Declaration!.WithoutTrivia()).Append("; ")
+                .Append(Variable(loop)).Append(' ').Append(condition.OperatorToken.Text).Append(' ').Append(bound).Append("; ")
+                .Append(loop.Incrementors[0].WithoutTrivia()).Append(")\n").Append(pad).Append("{\n");
+        }
+
+        text.Append(new string(' ', 4 * _nest.Count)).Append(d.Buffer).Append('[').Append(Subscripts(d.Position, 0)).Append("] = ").Append(d.WestCore.WithoutTrivia()).Append(";\n");
+        for (int level = _nest.Count - 1; level >= 0; level--)
+        {
+            text.Append(new string(' ', 4 * level)).Append('}');
+            if (level > 0)
+            {
+                text.Append('\n');
+            }
+        }
+
+        return text.ToString();
     }
 
     /// <summary>The two faces of a difference <c>E − W</c> (or <c>W − E</c>) whose east term is the west term one cell up.</summary>
@@ -137,10 +253,15 @@ internal sealed class TwoPassFaceFlux
         return null;
     }
 
-    private static bool IsCountedLoop(ForStatementSyntax loop, string i, out BinaryExpressionSyntax condition)
+    private static string? Variable(ForStatementSyntax loop) =>
+        loop.Declaration is { Variables.Count: 1 } declaration ? declaration.Variables[0].Identifier.ValueText : null;
+
+    /// <summary>A <c>for (int i = lo; i &lt; hi; i++)</c>-style loop (also <c>&lt;=</c>, <c>++i</c>, <c>i += 1</c>).</summary>
+    private static bool IsCountedLoop(ForStatementSyntax loop, out string variable)
     {
-        condition = null!;
-        if (loop.Declaration is not { Variables.Count: 1 } declaration || declaration.Variables[0] is not { Initializer: not null } variable || variable.Identifier.ValueText != i
+        variable = Variable(loop) ?? string.Empty;
+        string i = variable;
+        if (variable.Length == 0 || loop.Declaration!.Variables[0].Initializer is null
             || loop.Initializers.Count != 0
             || loop.Condition is not BinaryExpressionSyntax { Left: IdentifierNameSyntax bound } c || bound.Identifier.ValueText != i
             || !(c.IsKind(SyntaxKind.LessThanExpression) || c.IsKind(SyntaxKind.LessThanOrEqualExpression))
@@ -149,7 +270,6 @@ internal sealed class TwoPassFaceFlux
             return false;
         }
 
-        condition = c;
         return loop.Incrementors[0] switch
         {
             PostfixUnaryExpressionSyntax { Operand: IdentifierNameSyntax v } p => p.IsKind(SyntaxKind.PostIncrementExpression) && v.Identifier.ValueText == i,
@@ -178,20 +298,23 @@ internal sealed class TwoPassFaceFlux
 
     private static bool IsRead(ElementAccessExpressionSyntax e, string array) => e.Expression is IdentifierNameSyntax id && id.Identifier.ValueText == array;
 
-    /// <summary>The offsets at which <paramref name="expression"/> reads <paramref name="array"/> along <paramref name="i"/> (null for any other subscript).</summary>
-    private static HashSet<long?> Offsets(ExpressionSyntax expression, string array, string i) =>
-        new(expression.DescendantNodesAndSelf().OfType<ElementAccessExpressionSyntax>().Where(e => IsRead(e, array)).Select(e => Offset(e, i)));
+    /// <summary>The offset of subscript <paramref name="position"/> from its loop variable (null for any other subscript form).</summary>
+    private static long? Offset(ElementAccessExpressionSyntax e, int position, IReadOnlyList<string> subscripts)
+    {
+        if (e.ArgumentList.Arguments.Count != subscripts.Count)
+        {
+            return null;
+        }
 
-    private static long? Offset(ElementAccessExpressionSyntax e, string i) =>
-        e.ArgumentList.Arguments.Count == 1
-            ? e.ArgumentList.Arguments[0].Expression switch
-            {
-                IdentifierNameSyntax id when id.Identifier.ValueText == i => 0,
-                BinaryExpressionSyntax { Left: IdentifierNameSyntax id, Right: LiteralExpressionSyntax { Token.Value: int k } } b when id.Identifier.ValueText == i && b.IsKind(SyntaxKind.AddExpression) => k,
-                BinaryExpressionSyntax { Left: IdentifierNameSyntax id, Right: LiteralExpressionSyntax { Token.Value: int k } } b when id.Identifier.ValueText == i && b.IsKind(SyntaxKind.SubtractExpression) => -k,
-                _ => null,
-            }
-            : null;
+        string v = subscripts[position];
+        return e.ArgumentList.Arguments[position].Expression switch
+        {
+            IdentifierNameSyntax id when id.Identifier.ValueText == v => 0,
+            BinaryExpressionSyntax { Left: IdentifierNameSyntax id, Right: LiteralExpressionSyntax { Token.Value: int k } } b when id.Identifier.ValueText == v && b.IsKind(SyntaxKind.AddExpression) => k,
+            BinaryExpressionSyntax { Left: IdentifierNameSyntax id, Right: LiteralExpressionSyntax { Token.Value: int k } } b when id.Identifier.ValueText == v && b.IsKind(SyntaxKind.SubtractExpression) => -k,
+            _ => null,
+        };
+    }
 
     private static bool Same(SyntaxNode a, SyntaxNode b) =>
         a.NormalizeWhitespace().ToFullString() == b.NormalizeWhitespace().ToFullString();

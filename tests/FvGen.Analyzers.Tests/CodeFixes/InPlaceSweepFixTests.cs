@@ -357,4 +357,130 @@ public sealed class InPlaceSweepFixTests
             """;
         return VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, batchFixedSource: fixedSource, equivalenceKey: EquivalenceKeys.ReadOldStateFromCopy);
     }
+
+    [Fact]
+    public async Task TwoDimensionalSweepGetsOneBufferPerDirection()
+    {
+        // Cells (1 … nx − 2, 1 … ny − 2): x-faces 1 … nx − 1 on those rows, y-faces 1 … ny − 1 on those columns.
+        const string fixedSource = """
+            static class Plate
+            {
+                static double Donor(double a, double b) => a;
+
+                [ConservativeUpdate]
+                public static void Step(double[,] q, int nx, int ny, double cx, double cy)
+                {
+                    // fluxX[i, j]: the face between cells (i - 1, j) and (i, j), from the old state.
+                    var fluxX = new double[q.GetLength(0) + 1, q.GetLength(1)];
+                    for (int j = 1; j < ny - 1; j++)
+                    {
+                        for (int i = 1; i < nx; i++)
+                        {
+                            fluxX[i, j] = Donor(q[i - 1, j], q[i, j]);
+                        }
+                    }
+
+                    // fluxY[i, j]: the face between cells (i, j - 1) and (i, j), from the old state.
+                    var fluxY = new double[q.GetLength(0), q.GetLength(1) + 1];
+                    for (int j = 1; j < ny; j++)
+                    {
+                        for (int i = 1; i < nx - 1; i++)
+                        {
+                            fluxY[i, j] = Donor(q[i, j - 1], q[i, j]);
+                        }
+                    }
+
+                    for (int j = 1; j < ny - 1; j++)
+                        for (int i = 1; i < nx - 1; i++)
+                            q[i, j] -= cx * (fluxX[i + 1, j] - fluxX[i, j]) + cy * (fluxY[i, j + 1] - fluxY[i, j]);
+                }
+            }
+            """;
+        await VerifyCS.VerifyCodeFixAsync(
+            """
+            static class Plate
+            {
+                static double Donor(double a, double b) => a;
+
+                [ConservativeUpdate]
+                public static void Step(double[,] q, int nx, int ny, double cx, double cy)
+                {
+                    for (int j = 1; j < ny - 1; j++)
+                        for (int i = 1; i < nx - 1; i++)
+                            {|#0:q[i, j] -= cx * (Donor(q[i, j], q[i + 1, j]) - Donor(q[i - 1, j], q[i, j])) + cy * (Donor(q[i, j], q[i, j + 1]) - Donor(q[i, j - 1], q[i, j]))|};
+                }
+            }
+            """,
+            [Swept(0)],
+            fixedSource,
+            equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(fixedSource);
+    }
+
+    [Fact]
+    public Task TwoDimensionalSweepWithOneDirectionOnlyGetsNoTwoPassForm()
+    {
+        // A y-neighbour read outside any y-face difference: the update is not a flux difference in y.
+        const string source = """
+            static class Plate
+            {
+                static double Donor(double a, double b) => a;
+
+                [ConservativeUpdate]
+                public static void Step(double[,] q, int nx, int ny, double cx, double cy)
+                {
+                    for (int j = 1; j < ny - 1; j++)
+                        for (int i = 1; i < nx - 1; i++)
+                            {|#0:q[i, j] -= cx * (Donor(q[i, j], q[i + 1, j]) - Donor(q[i - 1, j], q[i, j])) + cy * q[i, j - 1]|};
+                }
+            }
+            """;
+        return VerifyCS.VerifyCodeFixAsync(source, [Swept(0)], source, remaining: [Swept(0)], equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+    }
+
+    [Fact]
+    public async Task StateStructFluxGetsABufferOfTheStateType()
+    {
+        const string fixedSource = """
+            public struct Wave
+            {
+                public double H, Hu;
+
+                public Wave(double h, double hu) { H = h; Hu = hu; }
+
+                public static Wave operator +(Wave a, Wave b) => new(a.H + b.H, a.Hu + b.Hu);
+                public static Wave operator -(Wave a, Wave b) => new(a.H - b.H, a.Hu - b.Hu);
+                public static Wave operator *(double s, Wave a) => new(s * a.H, s * a.Hu);
+            }
+
+            static class Channel
+            {
+                static Wave Rusanov(Wave l, Wave r) => 0.5 * (l + r);
+
+                [ConservativeUpdate]
+                public static void Step(Wave[] w, double c)
+                {
+                    // flux[i]: the face between cells i - 1 and i, from the old state.
+                    var flux = new Wave[w.Length + 1];
+                    for (int i = 1; i < w.Length; i++)
+                    {
+                        flux[i] = Rusanov(w[i - 1], w[i]);
+                    }
+
+                    for (int i = 1; i < w.Length - 1; i++)
+                    {
+                        w[i] = w[i] - c * (flux[i + 1] - flux[i]);
+                    }
+                }
+            }
+            """;
+        await VerifyCS.VerifyCodeFixAsync(
+            fixedSource
+                .Replace("        // flux[i]: the face between cells i - 1 and i, from the old state.\n        var flux = new Wave[w.Length + 1];\n        for (int i = 1; i < w.Length; i++)\n        {\n            flux[i] = Rusanov(w[i - 1], w[i]);\n        }\n\n", string.Empty)
+                .Replace("w[i] = w[i] - c * (flux[i + 1] - flux[i]);", "{|#0:w[i] = w[i] - c * (Rusanov(w[i], w[i + 1]) - Rusanov(w[i - 1], w[i]))|};"),
+            [Swept(0)],
+            fixedSource,
+            equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(fixedSource);
+    }
 }
