@@ -483,4 +483,100 @@ public sealed class InPlaceSweepFixTests
             equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
         await AssertCleanAsync(fixedSource);
     }
+
+    [Fact]
+    public async Task ThreeDimensionalSweepGetsThreeBuffers()
+    {
+        const string fixedSource = """
+            static class Box
+            {
+                [ConservativeUpdate]
+                public static void Step(double[,,] q, int n, double c)
+                {
+                    // fluxX[i, j, k]: the face between cells (i - 1, j, k) and (i, j, k), from the old state.
+                    var fluxX = new double[q.GetLength(0) + 1, q.GetLength(1), q.GetLength(2)];
+                    for (int k = 1; k < n - 1; k++)
+                    {
+                        for (int j = 1; j < n - 1; j++)
+                        {
+                            for (int i = 1; i < n; i++)
+                            {
+                                fluxX[i, j, k] = q[i - 1, j, k] * q[i, j, k];
+                            }
+                        }
+                    }
+
+                    // fluxY[i, j, k]: the face between cells (i, j - 1, k) and (i, j, k), from the old state.
+                    var fluxY = new double[q.GetLength(0), q.GetLength(1) + 1, q.GetLength(2)];
+                    for (int k = 1; k < n - 1; k++)
+                    {
+                        for (int j = 1; j < n; j++)
+                        {
+                            for (int i = 1; i < n - 1; i++)
+                            {
+                                fluxY[i, j, k] = q[i, j - 1, k] * q[i, j, k];
+                            }
+                        }
+                    }
+
+                    // fluxZ[i, j, k]: the face between cells (i, j, k - 1) and (i, j, k), from the old state.
+                    var fluxZ = new double[q.GetLength(0), q.GetLength(1), q.GetLength(2) + 1];
+                    for (int k = 1; k < n; k++)
+                    {
+                        for (int j = 1; j < n - 1; j++)
+                        {
+                            for (int i = 1; i < n - 1; i++)
+                            {
+                                fluxZ[i, j, k] = q[i, j, k - 1] * q[i, j, k];
+                            }
+                        }
+                    }
+
+                    for (int k = 1; k < n - 1; k++)
+                        for (int j = 1; j < n - 1; j++)
+                            for (int i = 1; i < n - 1; i++)
+                                q[i, j, k] -= c * ((fluxX[i + 1, j, k] - fluxX[i, j, k]) + (fluxY[i, j + 1, k] - fluxY[i, j, k]) + (fluxZ[i, j, k + 1] - fluxZ[i, j, k]));
+                }
+            }
+            """;
+        await VerifyCS.VerifyCodeFixAsync(
+            """
+            static class Box
+            {
+                [ConservativeUpdate]
+                public static void Step(double[,,] q, int n, double c)
+                {
+                    for (int k = 1; k < n - 1; k++)
+                        for (int j = 1; j < n - 1; j++)
+                            for (int i = 1; i < n - 1; i++)
+                                {|#0:q[i, j, k] -= c * ((q[i, j, k] * q[i + 1, j, k] - q[i - 1, j, k] * q[i, j, k]) + (q[i, j, k] * q[i, j + 1, k] - q[i, j - 1, k] * q[i, j, k]) + (q[i, j, k] * q[i, j, k + 1] - q[i, j, k - 1] * q[i, j, k]))|};
+                }
+            }
+            """,
+            [Swept(0)],
+            fixedSource,
+            equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await AssertCleanAsync(fixedSource);
+    }
+
+    [Fact]
+    public Task ParallelSweepGetsNoTwoPassForm()
+    {
+        const string source = """
+            static class Burgers
+            {
+                static double Godunov(double left, double right) => 0.5 * Math.Max(left * left, right * right);
+
+                [ConservativeUpdate]
+                public static void Step(double[] u, double c)
+                {
+                    Parallel.For(1, u.Length - 1, i =>
+                    {
+                        {|#0:u[i] = u[i] - c * (Godunov(u[i], u[i + 1]) - Godunov(u[i - 1], u[i]))|};
+                    });
+                }
+            }
+            """;
+        return VerifyCS.VerifyCodeFixAsync(source, [Swept(0)], source, remaining: [Swept(0)], equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+    }
 }
