@@ -44,8 +44,8 @@ public sealed class DroppedFaceTermFix : FindingFix
             return Enumerable.Empty<CodeAction>();
         }
 
-        string title = plan.NewLocal is { } local
-            ? "Add the other face `" + local.PreferredName + " = " + local.Initializer + "` and its term `" + plan.Addend(local.PreferredName) + "`"
+        string title = plan.NewLocal is { } local && LocalNames.Unique(local.Statement, local.PreferredName) is var name
+            ? "Add the other face `" + name + " = " + local.Initializer + "` and its term `" + plan.Addend(name) + "`"
             : "Add the missing counterpart `" + plan.Addend(string.Empty) + "`";
         return new[]
         {
