@@ -21,6 +21,11 @@ public partial struct Water
 }
 
 /// <summary>Shallow water with a Rusanov flux: the physics both the generated and the hand-written residuals call.</summary>
+/// <remarks>
+/// The generator tests have their own shallow-water kernel type (tests/FvGen.Generator.Tests/Kernels/ShallowWater.cs)
+/// on purpose: the benchmark must not depend on the test project, its flux is written component by component
+/// because it is the measured hot path, while the tests' flux uses the generated state operators to exercise them.
+/// </remarks>
 public static partial class ShallowWaterPhysics
 {
     public const double Gravity = 9.81;

@@ -23,8 +23,8 @@ public sealed class WidthAwareReconstructionTests
         var random = new Random(seed);
         var (low, high) = RandomGrids.Sides(periodic, "x");
         var grid = new StructuredGrid1D(RandomGrids.Axis(random, 37), low, high);
-        var binding = OpenEverywhere(grid.PatchNames);
-        var u = RandomState(random, grid.CellCount);
+        var binding = Bindings.Each(grid.PatchNames, () => Advection.Boundary.Open);
+        var u = RandomStates.Scalars(random, grid.CellCount, 1, -0.5);
         var (builtIn, builtInTally) = Run(grid.PatchNames.Count, u.Length, (r, t) => Advection.MusclVanLeer1D(grid, u, r, binding, t));
         var (user, userTally) = Run(grid.PatchNames.Count, u.Length, (r, t) => Advection.WidthAwareVanLeer1D(grid, u, r, binding, t));
         AssertBitwise(builtIn, builtInTally, user, userTally);
@@ -42,12 +42,9 @@ public sealed class WidthAwareReconstructionTests
     public void UserMusclIsTheBuiltInLinearBitwiseIn3DInEveryMode(bool px, bool py, bool pz, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(px, "x");
-        var (yl, yh) = RandomGrids.Sides(py, "y");
-        var (zl, zh) = RandomGrids.Sides(pz, "z");
-        var grid = new StructuredGrid3D(RandomGrids.Axis(random, 6), RandomGrids.Axis(random, 5), RandomGrids.Axis(random, 4), xl, xh, yl, yh, zl, zh);
-        var binding = OpenEverywhere(grid.PatchNames);
-        var u = RandomState(random, grid.CellCount);
+        var grid = RandomGrids.Grid3D(random, 6, 5, 4, px, py, pz);
+        var binding = Bindings.Each(grid.PatchNames, () => Advection.Boundary.Open);
+        var u = RandomStates.Scalars(random, grid.CellCount, 1, -0.5);
         int patches = grid.PatchNames.Count, n = grid.CellCount;
         var (builtIn, builtInTally) = Run(patches, n, (r, t) => Advection.MusclVanLeer3D(grid, u, r, binding, t));
         var (user, userTally) = Run(patches, n, (r, t) => Advection.WidthAwareVanLeer3D(grid, u, r, binding, t));
@@ -74,7 +71,7 @@ public sealed class WidthAwareReconstructionTests
         var random = new Random(76);
         // Widths drawn from [0.5, 1.5]: neighbouring cells differ by up to a factor 3, not smoothly.
         var grid = new StructuredGrid1D(RandomGrids.Axis(random, 30), SideBoundary.Patch("west"), SideBoundary.Patch("east"));
-        var binding = OpenEverywhere(grid.PatchNames);
+        var binding = Bindings.Each(grid.PatchNames, () => Advection.Boundary.Open);
         // u = x: every slope is 1, θ = 1 and φ(1) = 1, so each face, the outflow boundary face included,
         // sees the exact value at its node and u_t = -u_x = -1 (a = Advection.Velocity.X = 1).
         var u = new Scalar[grid.CellCount];
@@ -92,27 +89,7 @@ public sealed class WidthAwareReconstructionTests
         }
     }
 
-    private static BoundaryBinding<Advection.Boundary> OpenEverywhere(IReadOnlyList<string> patches)
-    {
-        var binding = new BoundaryBinding<Advection.Boundary>();
-        foreach (string name in patches)
-        {
-            binding.Bind(name, Advection.Boundary.Open);
-        }
 
-        return binding;
-    }
-
-    private static Scalar[] RandomState(Random random, int cells)
-    {
-        var u = new Scalar[cells];
-        for (int c = 0; c < cells; c++)
-        {
-            u[c] = new Scalar(random.NextDouble() - 0.5);
-        }
-
-        return u;
-    }
 
     private static (Scalar[] Rate, BoundaryFluxTally Tally) Run(int patches, int cells, Action<Scalar[], BoundaryFluxTally> kernel)
     {
