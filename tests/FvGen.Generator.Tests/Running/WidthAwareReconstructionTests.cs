@@ -66,6 +66,22 @@ public sealed class WidthAwareReconstructionTests
     }
 
     [Fact]
+    public void DirectionsOfOneOrTwoCellsHaveNoGhostAndStillBalance()
+    {
+        // Two cells along x and one along y: no pair inward for a ghost, so zero slopes and cell averages
+        // on the boundary faces there; z has three cells and ghosts. Built-in and user agree, and both balance.
+        var random = new Random(77);
+        var grid = RandomGrids.Grid3D(random, 2, 1, 3, false, false, false);
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(3) == 0 ? Advection.Boundary.Wall : Advection.Boundary.Open);
+        var u = RandomStates.Scalars(random, grid.CellCount, 1, -0.5);
+        int patches = grid.PatchNames.Count, n = grid.CellCount;
+        var (builtIn, builtInTally) = Run(patches, n, (r, t) => Advection.MusclVanLeer3D(grid, u, r, binding, t));
+        var (user, userTally) = Run(patches, n, (r, t) => Advection.WidthAwareVanLeer3D(grid, u, r, binding, t));
+        AssertBitwise(builtIn, builtInTally, user, userTally);
+        Assert.True(Balance.RelativeImbalance(grid, Scalar.AsComponents(builtIn.AsSpan()), 1, builtInTally) <= 1e-13);
+    }
+
+    [Fact]
     public void UserMusclReconstructsALinearProfileExactlyOnAStretchedGrid()
     {
         var random = new Random(76);
