@@ -1,6 +1,7 @@
 using BenchmarkDotNet.Attributes;
 using BenchmarkDotNet.Configs;
 using FvGen.Boundaries;
+using FvGen.Geometry;
 using FvGen.Meshes.Structured;
 using FvGen.Meshes.Unstructured;
 
@@ -21,6 +22,8 @@ public class ResidualBenchmarks
     private StructuredGrid3D _cube = null!;
     private Water[] _cubeState = null!, _cubeResidual = null!, _gridFaceFlux = null!;
     private BoundaryBinding<ShallowWaterPhysics.Boundary> _cubeWalls = null!;
+    private Gradient<Water>[] _meshGradients = null!;
+    private BoundaryBinding<Smoothing.Boundary> _meshInsulated = null!;
     private readonly ParallelOptions _twoThreads = new() { MaxDegreeOfParallelism = 2 };
 
     [GlobalSetup]
@@ -50,6 +53,13 @@ public class ResidualBenchmarks
             _meshWalls.Bind(name, ShallowWaterPhysics.Boundary.Wall);
         }
 
+        _meshGradients = new Gradient<Water>[_mesh.CellCount];
+        _meshInsulated = new BoundaryBinding<Smoothing.Boundary>();
+        foreach (string name in _mesh.PatchNames)
+        {
+            _meshInsulated.Bind(name, Smoothing.Boundary.Insulated);
+        }
+
         _gridFaceFlux = new Water[_grid.FaceCount];
         _cube = new StructuredGrid3D(
             GridAxis.Uniform(64, 0, 1), GridAxis.Uniform(64, 0, 1), GridAxis.Uniform(64, 0, 1),
@@ -68,6 +78,8 @@ public class ResidualBenchmarks
         Agree("coloured", HandWrittenColoured, GeneratedColoured, _meshResidual);
         Agree("structured 3-D", HandWrittenStructured3D, GeneratedStructured3D, _cubeResidual);
         Agree("structured gather", HandWrittenGather2D, GeneratedGather2D, _gridResidual);
+        Agree("unstructured second order", HandWrittenUnstructuredLinear, GeneratedUnstructuredLinear, _meshResidual);
+        Agree("unstructured diffusion", HandWrittenUnstructuredDiffusion, GeneratedUnstructuredDiffusion, _meshResidual);
     }
 
     private static void Agree(string what, Action handWritten, Action generated, Water[] residual)
@@ -133,6 +145,18 @@ public class ResidualBenchmarks
 
     [Benchmark, BenchmarkCategory("Structured 2-D, 256x256, gather, 2 threads")]
     public void GeneratedGather2D() => ShallowWaterPhysics.StructuredGather(_grid, _gridState, _gridResidual, _gridFaceFlux, _gridWalls, _twoThreads);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Unstructured triangles, 51 200 cells, Green-Gauss + Barth-Jespersen, serial")]
+    public void HandWrittenUnstructuredLinear() => HandWrittenGradientResiduals.UnstructuredLinear(_mesh, _meshState, _meshResidual, _meshGradients);
+
+    [Benchmark, BenchmarkCategory("Unstructured triangles, 51 200 cells, Green-Gauss + Barth-Jespersen, serial")]
+    public void GeneratedUnstructuredLinear() => ShallowWaterPhysics.UnstructuredLinear(_mesh, _meshState, _meshResidual, _meshGradients, _meshWalls);
+
+    [Benchmark(Baseline = true), BenchmarkCategory("Unstructured triangles, 51 200 cells, gradient diffusion flux, serial")]
+    public void HandWrittenUnstructuredDiffusion() => HandWrittenGradientResiduals.UnstructuredDiffusion(_mesh, _meshState, _meshResidual, _meshGradients);
+
+    [Benchmark, BenchmarkCategory("Unstructured triangles, 51 200 cells, gradient diffusion flux, serial")]
+    public void GeneratedUnstructuredDiffusion() => Smoothing.Unstructured(_mesh, _meshState, _meshResidual, _meshGradients, _meshInsulated);
 
     private static Water[] RandomWater(Random random, int count)
     {

@@ -21,6 +21,11 @@ public partial struct Water
 }
 
 /// <summary>Shallow water with a Rusanov flux: the physics both the generated and the hand-written residuals call.</summary>
+/// <remarks>
+/// The generator tests have their own shallow-water kernel type (tests/FvGen.Generator.Tests/Kernels/ShallowWater.cs)
+/// on purpose: the benchmark must not depend on the test project, its flux is written component by component
+/// because it is the measured hot path, while the tests' flux uses the generated state operators to exercise them.
+/// </remarks>
 public static partial class ShallowWaterPhysics
 {
     public const double Gravity = 9.81;
@@ -87,4 +92,38 @@ public static partial class ShallowWaterPhysics
     [ResidualKernel(nameof(Rusanov), Mode = ExecutionMode.ParallelGather)]
     public static partial void StructuredGather(
         StructuredGrid2D grid, ReadOnlyMemory<Water> state, Memory<Water> residual, [FaceData] Memory<Water> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);
+
+    [ResidualKernel(nameof(Rusanov), Reconstruction = ReconstructionKind.Linear)]
+    public static partial void UnstructuredLinear(
+        UnstructuredMesh mesh, ReadOnlySpan<Water> state, Span<Water> residual, Span<Gradient<Water>> gradients, BoundaryBinding<Boundary> boundaries);
+}
+
+/// <summary>
+/// Smoothing of depth and discharge by a diffusion flux that takes the two cells' gradients: the
+/// physics of the gradient-taking pair (benchmark physics, not a validated model).
+/// </summary>
+public static partial class Smoothing
+{
+    public const double Diffusivity = 0.01;
+
+    /// <summary>−κ times the mean of the two cells' gradients along the normal, per component.</summary>
+    [NumericalFlux(Antisymmetric = true)]
+    public static Water MeanGradient(in Water left, in Water right, in FaceGeometry face, in Gradient<Water> leftGradient, in Gradient<Water> rightGradient)
+    {
+        Vec3 n = face.Normal;
+        double k = -0.5 * Diffusivity;
+        Water f;
+        f.Depth = k * ((leftGradient.X.Depth + rightGradient.X.Depth) * n.X + (leftGradient.Y.Depth + rightGradient.Y.Depth) * n.Y + (leftGradient.Z.Depth + rightGradient.Z.Depth) * n.Z);
+        f.Flow.X = k * ((leftGradient.X.Flow.X + rightGradient.X.Flow.X) * n.X + (leftGradient.Y.Flow.X + rightGradient.Y.Flow.X) * n.Y + (leftGradient.Z.Flow.X + rightGradient.Z.Flow.X) * n.Z);
+        f.Flow.Y = k * ((leftGradient.X.Flow.Y + rightGradient.X.Flow.Y) * n.X + (leftGradient.Y.Flow.Y + rightGradient.Y.Flow.Y) * n.Y + (leftGradient.Z.Flow.Y + rightGradient.Z.Flow.Y) * n.Z);
+        return f;
+    }
+
+    /// <summary>Nothing diffuses through the boundary.</summary>
+    [BoundaryFlux(BoundaryKind.Wall)]
+    public static Water Insulated(in Water inside, in FaceGeometry face) => default;
+
+    [ResidualKernel(nameof(MeanGradient))]
+    public static partial void Unstructured(
+        UnstructuredMesh mesh, ReadOnlySpan<Water> state, Span<Water> residual, Span<Gradient<Water>> gradients, BoundaryBinding<Boundary> boundaries);
 }

@@ -8,7 +8,8 @@ namespace FvGen.Generator.Fluxes;
 /// <param name="StateModifier">Modifier of the state parameter(s).</param>
 /// <param name="FaceModifier">Modifier of the face parameter.</param>
 /// <param name="GradientModifier">The modifier of the two gradient parameters of a diffusion flux, or null when the flux takes no gradients.</param>
-internal sealed record FluxCall(string Name, string StateModifier, string FaceModifier, string? GradientModifier = null)
+/// <param name="WidthModifier">The modifier of the four cell widths of a width-aware structured user reconstruction, or null for its geometry-free form.</param>
+internal sealed record FluxCall(string Name, string StateModifier, string FaceModifier, string? GradientModifier = null, string? WidthModifier = null)
 {
     /// <summary>True for a flux that takes the two cells' gradients after the face (a diffusion flux).</summary>
     public bool TakesGradients => GradientModifier is not null;

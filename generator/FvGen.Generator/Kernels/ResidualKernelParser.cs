@@ -254,7 +254,7 @@ internal static class ResidualKernelParser
                 string n = stateSymbol.Name;
                 string expected = unstructured
                     ? "static void " + userName + "(in " + n + " cell, in Gradient<" + n + "> gradient, in Vec3 toFace, out " + n + " faceState)"
-                    : "static void " + userName + "(in " + n + " leftLeft, in " + n + " left, in " + n + " right, in " + n + " rightRight, out " + n + " leftFace, out " + n + " rightFace)";
+                    : "static void " + userName + "(in " + n + " leftLeft, in " + n + " left, in " + n + " right, in " + n + " rightRight, [double widthLeftLeft, double widthLeft, double widthRight, double widthRightRight,] out " + n + " leftFace, out " + n + " rightFace)";
                 problems?.Add(new Problem(
                     Descriptors.ReconstructionNotAvailable,
                     location,
@@ -301,39 +301,52 @@ internal static class ResidualKernelParser
             new EquatableArray<KernelMode>(runtimeModes));
     }
 
-    /// <summary>Finds the user reconstruction <paramref name="name"/> in <paramref name="type"/> and checks its signature.</summary>
+    /// <summary>
+    /// Finds the structured user reconstruction <paramref name="name"/> in <paramref name="type"/> and checks its
+    /// signature: four cell states, optionally their four widths along the face direction (<c>double</c>), then
+    /// the two face states <c>out</c>.
+    /// </summary>
+    /// <returns>A call whose <c>WidthModifier</c> is null for the geometry-free form.</returns>
     private static FluxCall? UserReconstructionCall(INamedTypeSymbol type, string name, ITypeSymbol state, out string? why)
     {
         why = "no static method of that name";
         foreach (var candidate in type.GetMembers(name).OfType<IMethodSymbol>())
         {
             var p = candidate.Parameters;
-            if (!candidate.IsStatic || !candidate.ReturnsVoid || candidate.IsGenericMethod || p.Length != 6)
+            if (!candidate.IsStatic || !candidate.ReturnsVoid || candidate.IsGenericMethod || (p.Length != 6 && p.Length != 10))
             {
-                why = "it must be static, return void and take six parameters";
+                why = "it must be static, return void and take six parameters (four cell states, two face states) or ten (the four cells' widths after the cell states)";
                 continue;
             }
 
-            if (p.Any(x => !SymbolEqualityComparer.Default.Equals(x.Type, state)))
+            var states = p.Take(4).Concat(p.Skip(p.Length - 2)).ToList();
+            var widths = p.Skip(4).Take(p.Length - 6).ToList();
+            if (states.Any(x => !SymbolEqualityComparer.Default.Equals(x.Type, state)))
             {
-                why = "every parameter must be a " + state.Name;
+                why = "the four cell states and the two face states must be " + state.Name + "s";
                 continue;
             }
 
-            if (p.Take(4).Any(x => x.RefKind is not (RefKind.None or RefKind.In)) || p[4].RefKind != RefKind.Out || p[5].RefKind != RefKind.Out)
+            if (widths.Any(x => x.Type.SpecialType != SpecialType.System_Double))
+            {
+                why = "the four widths after the cell states must be doubles";
+                continue;
+            }
+
+            if (p.Take(4).Any(x => x.RefKind is not (RefKind.None or RefKind.In)) || p[p.Length - 2].RefKind != RefKind.Out || p[p.Length - 1].RefKind != RefKind.Out)
             {
                 why = "the four cell states are passed by value or 'in', the two face states are 'out'";
                 continue;
             }
 
-            if (p.Take(4).Any(x => x.RefKind != p[0].RefKind))
+            if (p.Take(4).Any(x => x.RefKind != p[0].RefKind) || widths.Any(x => x.RefKind != widths[0].RefKind) || widths.Any(x => x.RefKind is not (RefKind.None or RefKind.In)))
             {
-                why = "the four cell states must all be passed the same way (all by value or all 'in')";
+                why = "the four cell states must all be passed the same way (all by value or all 'in'), and so must the four widths";
                 continue;
             }
 
             why = null;
-            return new FluxCall(candidate.Name, p[0].RefKind == RefKind.In ? "in " : "", "out ");
+            return new FluxCall(candidate.Name, Modifier(p[0]), "out ", WidthModifier: widths.Count == 0 ? null : Modifier(widths[0]));
         }
 
         return null;

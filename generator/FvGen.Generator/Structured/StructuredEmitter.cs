@@ -56,9 +56,9 @@ internal static class StructuredEmitter
         }
 
         w.Line("residual.Clear();");
-        if (model.Reconstruction == KernelReconstruction.Linear)
+        if (model.Reconstruction != KernelReconstruction.FirstOrder)
         {
-            MusclEmitter.DeclareLimiter(w, model);
+            MusclEmitter.DeclareFunctions(w, model);
         }
 
         bool hasBoundaries = KernelNames.Find(model, ParameterRole.Boundaries) is not null;
@@ -164,7 +164,7 @@ internal static class StructuredEmitter
             body.Line("int left = right - " + Stride[d] + ";");
             body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, "1.0") + ", area, " + Centroid(dim, d, Index[d]) + ", "
                 + Axis[d] + "Centres[" + Index[d] + "] - " + Axis[d] + "Centres[" + Index[d] + " - 1]);");
-            FaceFlux(body, model, d, "left", "right", Index[d] + " - 1", Index[d]);
+            FaceFlux(body, model, d, "left", "right", Index[d] + " - 1", Index[d], wrap: false);
             apply(body);
         }, slabAxis, range);
     }
@@ -179,7 +179,7 @@ internal static class StructuredEmitter
             body.Line("int left = right + (" + Count[d] + " - 1) * " + Stride[d] + ";");
             body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, "1.0") + ", area, " + Centroid(dim, d, "0") + ", 0.5 * ("
                 + Axis[d] + "Widths[" + Count[d] + " - 1] + " + Axis[d] + "Widths[0]));");
-            FaceFlux(body, model, d, "left", "right", Count[d] + " - 1", "0");
+            FaceFlux(body, model, d, "left", "right", Count[d] + " - 1", "0", wrap: true);
             apply(body);
         });
     }
@@ -187,6 +187,7 @@ internal static class StructuredEmitter
     /// <summary>
     /// Writes the boundary faces of one side of direction <paramref name="d"/>: each <c>flux</c> (flux · area
     /// out of the domain from cell <c>inside</c>) handled by <paramref name="apply"/> and summed into the patch's tally.
+    /// With reconstruction the boundary flux sees the inside cell reconstructed toward the patch.
     /// </summary>
     internal static void BoundarySide(IndentedWriter w, ResidualKernelModel model, int dim, int d, bool high, Action<IndentedWriter> apply)
     {
@@ -205,7 +206,16 @@ internal static class StructuredEmitter
                 body.Line("int inside = " + CellIndex(dim) + ";");
                 body.Line("var face = new global::FvGen.Geometry.FaceGeometry(" + Normal(d, high ? "1.0" : "-1.0") + ", area, " + Centroid(dim, d, node) + ", 0.5 * "
                     + Axis[d] + "Widths[" + Index[d] + "]);");
-                body.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, "state[inside]", "face") + " * area;");
+                if (model.Reconstruction != KernelReconstruction.FirstOrder)
+                {
+                    MusclEmitter.BoundaryFaceState(body, model, Axis[d], Count[d], Stride[d], high);
+                    body.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, "insideFace", "face") + " * area;");
+                }
+                else
+                {
+                    body.Line(s + " flux = " + KernelEmitter.BoundaryCall(model, entry, "state[inside]", "face") + " * area;");
+                }
+
                 apply(body);
                 body.Line("total += flux;");
             });
@@ -214,12 +224,12 @@ internal static class StructuredEmitter
         w.Close();
     }
 
-    private static void FaceFlux(IndentedWriter w, ResidualKernelModel model, int d, string left, string right, string leftAlong, string rightAlong)
+    private static void FaceFlux(IndentedWriter w, ResidualKernelModel model, int d, string left, string right, string leftAlong, string rightAlong, bool wrap)
     {
         string s = model.State.FullyQualifiedName;
         if (model.Reconstruction != KernelReconstruction.FirstOrder)
         {
-            MusclEmitter.FaceStates(w, model, Axis[d], Count[d], Stride[d], left, right, leftAlong, rightAlong);
+            MusclEmitter.FaceStates(w, model, Axis[d], Count[d], Stride[d], left, right, leftAlong, rightAlong, wrap);
             w.Line(s + " flux = " + KernelEmitter.FluxCall(model, "leftFace", "rightFace", "face") + " * area;");
         }
         else

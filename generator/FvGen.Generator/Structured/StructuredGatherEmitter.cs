@@ -42,9 +42,9 @@ internal static class StructuredGatherEmitter
             StructuredGradientEmitter.Emit(w, model, dim);
         }
 
-        if (model.Reconstruction == KernelReconstruction.Linear)
+        if (model.Reconstruction != KernelReconstruction.FirstOrder)
         {
-            MusclEmitter.DeclareLimiter(w, model);
+            MusclEmitter.DeclareFunctions(w, model);
         }
 
         bool hasBoundaries = KernelNames.Find(model, ParameterRole.Boundaries) is not null;

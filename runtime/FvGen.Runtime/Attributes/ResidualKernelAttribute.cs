@@ -39,8 +39,11 @@ public sealed class ResidualKernelAttribute : Attribute
     /// The name of a user reconstruction method in the kernel's type, used when <see cref="Reconstruction"/>
     /// is <see cref="ReconstructionKind.User"/>. On structured grids: <c>static void Name(in TState leftLeft,
     /// in TState left, in TState right, in TState rightRight, out TState leftFace, out TState rightFace)</c>,
-    /// the four cells along the face direction; next to a boundary patch the missing outer cell is
-    /// replaced by its neighbour. On unstructured meshes: <c>static void Name(in TState cell,
+    /// the four cells along the face direction, or the same with their four widths along it
+    /// (<c>double widthLeftLeft, double widthLeft, double widthRight, double widthRightRight</c>) after the
+    /// cell states; next to a boundary patch the missing outer cell is a ghost extrapolated linearly
+    /// from inside (the cell itself when the direction has fewer than three cells), and boundary faces
+    /// are reconstructed too (docs/generator.md, "Reconstruction"). On unstructured meshes: <c>static void Name(in TState cell,
     /// in Gradient&lt;TState&gt; gradient, in Vec3 toFace, out TState faceState)</c>, for each side of every
     /// face, with the cell's Barth–Jespersen-limited Green–Gauss gradient and the vector from the cell
     /// centroid to the face centroid.

@@ -32,6 +32,15 @@ public sealed class GoldenFileTests
             ("Demo.Ring.Residual.Residual.g.cs", "Ring.Residual.g.cs.txt"));
 
     [Fact]
+    public Task MusclKernelsNextToPatches() =>
+        Verify(
+            [Samples.Scalar, Samples.PatchedMuscl1D],
+            ("Demo.Heat.ConservedState.g.cs", "Heat.ConservedState.g.cs.txt"),
+            ("Demo.Channel.Boundary.g.cs", "Channel.Boundary.g.cs.txt"),
+            ("Demo.Channel.Limited.Residual.g.cs", "Channel.Limited.Residual.g.cs.txt"),
+            ("Demo.Channel.Central.Residual.g.cs", "Channel.Central.Residual.g.cs.txt"));
+
+    [Fact]
     public Task UnstructuredGatherKernel() =>
         Verify(
             [Samples.Scalar, Samples.ConductionUnstructured],

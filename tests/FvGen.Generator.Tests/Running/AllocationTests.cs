@@ -1,5 +1,6 @@
 using FvGen.Boundaries;
 using FvGen.Generator.Tests.Kernels;
+using FvGen.Generator.Tests.Support;
 using FvGen.Generator.Tests.Meshes;
 using FvGen.Geometry;
 using FvGen.Ledger;
@@ -16,7 +17,7 @@ public sealed class AllocationTests
         var grid = new StructuredGrid2D(
             GridAxis.Uniform(8, 0, 1), GridAxis.Uniform(6, 0, 1), SideBoundary.Patch("a"), SideBoundary.Patch("b"), SideBoundary.Periodic, SideBoundary.Periodic);
         var gridBinding = new BoundaryBinding<ShallowWater.Boundary>().Bind("a", ShallowWater.Boundary.Wall).Bind("b", ShallowWater.Boundary.Outflow);
-        var gridState = StructuredResidualTests.RandomWater(new Random(1), grid.CellCount);
+        var gridState = RandomStates.Water(new Random(1), grid.CellCount);
         var gridResidual = new WaterState[grid.CellCount];
         var gridTally = new BoundaryFluxTally(grid.PatchNames.Count, 3);
 
@@ -27,7 +28,7 @@ public sealed class AllocationTests
             meshBinding.Bind(name, ShallowWater.Boundary.Wall);
         }
 
-        var meshState = StructuredResidualTests.RandomWater(new Random(2), mesh.CellCount);
+        var meshState = RandomStates.Water(new Random(2), mesh.CellCount);
         var meshResidual = new WaterState[mesh.CellCount];
         var gradients = new Gradient<WaterState>[mesh.CellCount];
         var meshTally = new BoundaryFluxTally(mesh.PatchNames.Count, 3);

@@ -37,9 +37,9 @@ public sealed class MusclStretchedGridTests
 
         var rate = new Scalar[grid.CellCount];
         kernel(grid, u, rate, binding, null);
-        // Cells 0 and 1 have an inflow face or an upwind cell without a second neighbour (first order
-        // toward the patch); the last cell's outflow face sees its average.
-        for (int i = 2; i < grid.CellCount - 1; i++)
+        // Cell 0 alone differs: its west face carries the fixed inflow value 0.75, not u = 0. The ghosts
+        // beyond the patches continue the line, so cell 1 and the outflow face are exact too.
+        for (int i = 1; i < grid.CellCount; i++)
         {
             Assert.True(Math.Abs(rate[i].Value + 1.0) <= 1e-12, $"cell {i}: rate {rate[i].Value:R}, exact -1");
         }
@@ -69,11 +69,12 @@ public sealed class MusclStretchedGridTests
 
         var rate = new Scalar[grid.CellCount];
         Advection.MusclVanLeer3D(grid, u, rate, binding, null);
-        for (int k = 2; k < grid.Nz - 1; k++)
+        // Only cells with a low-side inflow face (fixed value 0.75) differ.
+        for (int k = 1; k < grid.Nz; k++)
         {
-            for (int j = 2; j < grid.Ny - 1; j++)
+            for (int j = 1; j < grid.Ny; j++)
             {
-                for (int i = 2; i < grid.Nx - 1; i++)
+                for (int i = 1; i < grid.Nx; i++)
                 {
                     double value = rate[grid.CellIndex(i, j, k)].Value;
                     Assert.True(Math.Abs(value + 2.75) <= 1e-12, $"cell ({i}, {j}, {k}): rate {value:R}, exact -2.75");
@@ -108,22 +109,18 @@ public sealed class MusclStretchedGridTests
         kernel(grid, u, rate, binding, null);
 
         // Reference (LeVeque 2002, ch. 6), upwind with a = 1: the face between cells i - 1 and i sees
-        // u_{i-1} + φ(θ) Δ⁻ / 2, θ = Δ⁺/Δ⁻ (zero slope when Δ⁻Δ⁺ ≤ 0 or without a second neighbour).
-        // Boundary: inflow value 0.75 enters at the west, the cell average leaves at the east.
+        // u_{i-1} + φ(θ) Δ⁻ / 2, θ = Δ⁺/Δ⁻ (zero slope when Δ⁻Δ⁺ ≤ 0). Beyond each patch a ghost cell
+        // continues the next inner difference (u_{-1} = u_0 − (u_2 − u_1), u_n = u_{n−1} + (u_{n−2} − u_{n−3}),
+        // common practice), so the end cells' Δ⁻ or Δ⁺ is that difference. Boundary: inflow value 0.75
+        // enters at the west; the east face sees the last cell reconstructed toward it.
         var faceFlux = new double[n + 1];
         faceFlux[0] = Advection.InflowValue;
         for (int f = 1; f <= n; f++)
         {
             int cell = f - 1;
-            double value = u[cell].Value;
-            if (cell >= 1 && cell <= n - 2 && f < n)
-            {
-                double backward = u[cell].Value - u[cell - 1].Value;
-                double forward = u[cell + 1].Value - u[cell].Value;
-                value += backward * forward <= 0 ? 0 : 0.5 * Phi(limiter, forward / backward) * backward;
-            }
-
-            faceFlux[f] = value;
+            double backward = cell >= 1 ? u[cell].Value - u[cell - 1].Value : u[2].Value - u[1].Value;
+            double forward = cell <= n - 2 ? u[cell + 1].Value - u[cell].Value : u[n - 2].Value - u[n - 3].Value;
+            faceFlux[f] = u[cell].Value + (backward * forward <= 0 ? 0 : 0.5 * Phi(limiter, forward / backward) * backward);
         }
 
         for (int i = 0; i < n; i++)

@@ -1,6 +1,7 @@
 using System.Runtime.InteropServices;
 using FvGen.Boundaries;
 using FvGen.Generator.Tests.Kernels;
+using FvGen.Generator.Tests.Support;
 using FvGen.Generator.Tests.Meshes;
 using FvGen.Meshes.Structured;
 
@@ -20,7 +21,7 @@ public sealed class RunTimeModeTests
             binding.Bind(name, random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
         }
 
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
         var options = new ParallelOptions { MaxDegreeOfParallelism = 2 };
         var buffer = new WaterState[mesh.FaceCount];
 
@@ -47,7 +48,7 @@ public sealed class RunTimeModeTests
         var grid = new StructuredGrid2D(
             GridAxis.Uniform(21, 0, 2), GridAxis.Uniform(15, 0, 1), SideBoundary.Patch("west"), SideBoundary.Patch("east"), SideBoundary.Periodic, SideBoundary.Periodic);
         var binding = new BoundaryBinding<ShallowWater.Boundary>().Bind("west", ShallowWater.Boundary.Wall).Bind("east", ShallowWater.Boundary.Outflow);
-        var state = StructuredResidualTests.RandomWater(random, grid.CellCount);
+        var state = RandomStates.Water(random, grid.CellCount);
         var options = new ParallelOptions { MaxDegreeOfParallelism = 2 };
         var buffer = new WaterState[grid.FaceCount];
 

@@ -38,9 +38,7 @@ public sealed class StructuredGatherTests
     public void Advection2D_GatherIsBitwiseIdenticalForOneTwoAndEightThreads(bool periodicX, bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 19), RandomGrids.Axis(random, 13), xl, xh, yl, yh);
+        var grid = RandomGrids.Grid2D(random, 19, 13, periodicX, periodicY);
         CheckAdvection(grid, random, Advection.Residual2D, (u, r, buffer, b, t, o) => Advection.Gather2D(grid, u, r, buffer, b, t, o));
     }
 
@@ -51,7 +49,7 @@ public sealed class StructuredGatherTests
     public void Advection3D_GatherIsBitwiseIdenticalForOneTwoAndEightThreads(bool px, bool py, bool pz, int seed)
     {
         var random = new Random(seed);
-        var grid = Grid3D(random, px, py, pz);
+        var grid = RandomGrids.Grid3D(random, 7, 6, 5, px, py, pz);
         CheckAdvection(grid, random, Advection.Residual3D, (u, r, buffer, b, t, o) => Advection.Gather3D(grid, u, r, buffer, b, t, o));
     }
 
@@ -61,7 +59,7 @@ public sealed class StructuredGatherTests
     public void MusclAdvection3D_GatherIsBitwiseIdenticalForOneTwoAndEightThreads(bool px, bool py, bool pz, int seed)
     {
         var random = new Random(seed);
-        var grid = Grid3D(random, px, py, pz);
+        var grid = RandomGrids.Grid3D(random, 7, 6, 5, px, py, pz);
         CheckAdvection(grid, random, Advection.MusclVanLeer3D, (u, r, buffer, b, t, o) => Advection.MusclGather3D(grid, u, r, buffer, b, t, o));
     }
 
@@ -71,16 +69,10 @@ public sealed class StructuredGatherTests
     public void MusclShallowWater2D_GatherIsBitwiseIdenticalAndBalances(bool periodicX, bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 23), RandomGrids.Axis(random, 17), xl, xh, yl, yh);
-        var binding = new BoundaryBinding<ShallowWater.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
-        }
+        var grid = RandomGrids.Grid2D(random, 23, 17, periodicX, periodicY);
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
 
-        var state = StructuredResidualTests.RandomWater(random, grid.CellCount);
+        var state = RandomStates.Water(random, grid.CellCount);
         var serial = new WaterState[grid.CellCount];
         var serialTally = new BoundaryFluxTally(grid.PatchNames.Count, WaterState.ComponentCount);
         ShallowWater.Muscl2D(grid, state, serial, binding, serialTally);
@@ -104,18 +96,10 @@ public sealed class StructuredGatherTests
     public void Conduction3D_GatherWithGradientsIsBitwiseIdenticalAndBalances()
     {
         var random = new Random(54);
-        var grid = Grid3D(random, px: false, py: true, pz: false);
-        var binding = new BoundaryBinding<Conduction.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, random.Next(2) == 0 ? Conduction.Boundary.FixedTemperature : Conduction.Boundary.Insulated);
-        }
+        var grid = RandomGrids.Grid3D(random, 7, 6, 5, periodicX: false, periodicY: true, periodicZ: false);
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(2) == 0 ? Conduction.Boundary.FixedTemperature : Conduction.Boundary.Insulated);
 
-        var temperature = new Scalar[grid.CellCount];
-        for (int c = 0; c < temperature.Length; c++)
-        {
-            temperature[c] = new Scalar(random.NextDouble() * 3);
-        }
+        var temperature = RandomStates.Scalars(random, grid.CellCount, 3);
 
         var serial = new Scalar[grid.CellCount];
         var serialGradients = new Gradient<Scalar>[grid.CellCount];
@@ -158,17 +142,9 @@ public sealed class StructuredGatherTests
     private static void CheckAdvection<TGrid>(TGrid grid, Random random, SerialKernel<TGrid> serialKernel, GatherKernel gather)
         where TGrid : StructuredGrid
     {
-        var binding = new BoundaryBinding<Advection.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, random.Next(3) == 0 ? Advection.Boundary.Wall : Advection.Boundary.Open);
-        }
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(3) == 0 ? Advection.Boundary.Wall : Advection.Boundary.Open);
 
-        var state = new Scalar[grid.CellCount];
-        for (int c = 0; c < state.Length; c++)
-        {
-            state[c] = new Scalar(random.NextDouble() - 0.25);
-        }
+        var state = RandomStates.Scalars(random, grid.CellCount, 1, -0.25);
 
         var serial = new Scalar[grid.CellCount];
         var serialTally = new BoundaryFluxTally(grid.PatchNames.Count, 1);
@@ -205,11 +181,4 @@ public sealed class StructuredGatherTests
         }
     }
 
-    private static StructuredGrid3D Grid3D(Random random, bool px, bool py, bool pz)
-    {
-        var (xl, xh) = RandomGrids.Sides(px, "x");
-        var (yl, yh) = RandomGrids.Sides(py, "y");
-        var (zl, zh) = RandomGrids.Sides(pz, "z");
-        return new StructuredGrid3D(RandomGrids.Axis(random, 7), RandomGrids.Axis(random, 6), RandomGrids.Axis(random, 5), xl, xh, yl, yh, zl, zh);
-    }
 }

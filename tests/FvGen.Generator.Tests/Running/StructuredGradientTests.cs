@@ -48,21 +48,10 @@ public sealed class StructuredGradientTests
     public void GradientFluxBalancesAndSlabsEqualSerialBitwise(bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(false, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var (zl, zh) = RandomGrids.Sides(false, "z");
-        var grid = new StructuredGrid3D(RandomGrids.Axis(random, 6), RandomGrids.Axis(random, 5), RandomGrids.Axis(random, 4), xl, xh, yl, yh, zl, zh);
-        var binding = new BoundaryBinding<Conduction.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, random.Next(2) == 0 ? Conduction.Boundary.FixedTemperature : Conduction.Boundary.Insulated);
-        }
+        var grid = RandomGrids.Grid3D(random, 6, 5, 4, false, periodicY, false);
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(2) == 0 ? Conduction.Boundary.FixedTemperature : Conduction.Boundary.Insulated);
 
-        var temperature = new Scalar[grid.CellCount];
-        for (int c = 0; c < temperature.Length; c++)
-        {
-            temperature[c] = new Scalar(random.NextDouble() * 3);
-        }
+        var temperature = RandomStates.Scalars(random, grid.CellCount, 3);
 
         var serial = new Scalar[grid.CellCount];
         var tally = new BoundaryFluxTally(grid.PatchNames.Count, 1);
@@ -88,11 +77,7 @@ public sealed class StructuredGradientTests
 
     private static BoundaryBinding<Conduction.Boundary> Insulated(StructuredGrid grid)
     {
-        var binding = new BoundaryBinding<Conduction.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, Conduction.Boundary.Insulated);
-        }
+        var binding = Bindings.Each(grid.PatchNames, () => Conduction.Boundary.Insulated);
 
         return binding;
     }

@@ -21,16 +21,10 @@ public sealed class StructuredParallelTests
     public void MusclSlabsEqualSerialBitwiseForOneTwoAndEightThreads(bool periodicX, bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 23), RandomGrids.Axis(random, 17), xl, xh, yl, yh);
-        var binding = new BoundaryBinding<ShallowWater.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
-        }
+        var grid = RandomGrids.Grid2D(random, 23, 17, periodicX, periodicY);
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
 
-        var state = StructuredResidualTests.RandomWater(random, grid.CellCount);
+        var state = RandomStates.Water(random, grid.CellCount);
         var serial = new WaterState[grid.CellCount];
         var serialTally = new BoundaryFluxTally(grid.PatchNames.Count, 3);
         ShallowWater.Muscl2D(grid, state, serial, binding, serialTally);
@@ -52,17 +46,9 @@ public sealed class StructuredParallelTests
         var (zl, zh) = RandomGrids.Sides(false, "z");
         var grid = new StructuredGrid3D(
             RandomGrids.Axis(random, 7), RandomGrids.Axis(random, 6), RandomGrids.Axis(random, 5), xl, xh, SideBoundary.Periodic, SideBoundary.Periodic, zl, zh);
-        var binding = new BoundaryBinding<Advection.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, Advection.Boundary.Open);
-        }
+        var binding = Bindings.Each(grid.PatchNames, () => Advection.Boundary.Open);
 
-        var state = new Scalar[grid.CellCount];
-        for (int c = 0; c < state.Length; c++)
-        {
-            state[c] = new Scalar(random.NextDouble());
-        }
+        var state = RandomStates.Scalars(random, grid.CellCount);
 
         var serial = new Scalar[grid.CellCount];
         Advection.Residual3D(grid, state, serial, binding, null);

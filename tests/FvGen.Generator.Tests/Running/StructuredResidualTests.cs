@@ -31,9 +31,7 @@ public sealed class StructuredResidualTests
     public void Advection2D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool periodicX, bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 13), RandomGrids.Axis(random, 9), xl, xh, yl, yh);
+        var grid = RandomGrids.Grid2D(random, 13, 9, periodicX, periodicY);
         Check(grid, random, Advection.Residual2D);
     }
 
@@ -44,7 +42,7 @@ public sealed class StructuredResidualTests
     public void Advection3D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool px, bool py, bool pz, int seed)
     {
         var random = new Random(seed);
-        var grid = Grid3D(random, px, py, pz);
+        var grid = RandomGrids.Grid3D(random, 6, 5, 4, px, py, pz);
         Check(grid, random, Advection.Residual3D);
     }
 
@@ -54,7 +52,7 @@ public sealed class StructuredResidualTests
     public void MusclAdvection3D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool px, bool py, bool pz, int seed)
     {
         var random = new Random(seed);
-        var grid = Grid3D(random, px, py, pz);
+        var grid = RandomGrids.Grid3D(random, 6, 5, 4, px, py, pz);
         Check(grid, random, Advection.MusclVanLeer3D);
     }
 
@@ -64,9 +62,7 @@ public sealed class StructuredResidualTests
     public void UserReconstruction2D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool periodicX, bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 12), RandomGrids.Axis(random, 10), xl, xh, yl, yh);
+        var grid = RandomGrids.Grid2D(random, 12, 10, periodicX, periodicY);
         Check(grid, random, Advection.Fromm2D);
     }
 
@@ -76,17 +72,11 @@ public sealed class StructuredResidualTests
     public void ShallowWater2D_ResidualTimesVolumeSumsToMinusBoundaryFlux(bool periodicX, bool periodicY, int seed)
     {
         var random = new Random(seed);
-        var (xl, xh) = RandomGrids.Sides(periodicX, "x");
-        var (yl, yh) = RandomGrids.Sides(periodicY, "y");
-        var grid = new StructuredGrid2D(RandomGrids.Axis(random, 11), RandomGrids.Axis(random, 8), xl, xh, yl, yh);
-        var state = RandomWater(random, grid.CellCount);
+        var grid = RandomGrids.Grid2D(random, 11, 8, periodicX, periodicY);
+        var state = RandomStates.Water(random, grid.CellCount);
         foreach (var kernel in new Action<StructuredGrid2D, ReadOnlySpan<WaterState>, Span<WaterState>, BoundaryBinding<ShallowWater.Boundary>, BoundaryFluxTally?>[] { ShallowWater.Residual2D, ShallowWater.Muscl2D })
         {
-            var binding = new BoundaryBinding<ShallowWater.Boundary>();
-            foreach (string name in grid.PatchNames)
-            {
-                binding.Bind(name, random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
-            }
+            var binding = Bindings.Each(grid.PatchNames, () => random.Next(2) == 0 ? ShallowWater.Boundary.Wall : ShallowWater.Boundary.Outflow);
 
             var residual = new WaterState[grid.CellCount];
             var tally = new BoundaryFluxTally(grid.PatchNames.Count, WaterState.ComponentCount);
@@ -150,17 +140,9 @@ public sealed class StructuredResidualTests
     private static void Check<TGrid>(TGrid grid, Random random, Kernel<TGrid> kernel)
         where TGrid : StructuredGrid
     {
-        var binding = new BoundaryBinding<Advection.Boundary>();
-        foreach (string name in grid.PatchNames)
-        {
-            binding.Bind(name, random.Next(3) == 0 ? Advection.Boundary.Wall : Advection.Boundary.Open);
-        }
+        var binding = Bindings.Each(grid.PatchNames, () => random.Next(3) == 0 ? Advection.Boundary.Wall : Advection.Boundary.Open);
 
-        var state = new Scalar[grid.CellCount];
-        for (int c = 0; c < state.Length; c++)
-        {
-            state[c] = new Scalar(random.NextDouble() * 2 - 0.5);
-        }
+        var state = RandomStates.Scalars(random, grid.CellCount, 2, -0.5);
 
         var residual = new Scalar[grid.CellCount];
         var tally = new BoundaryFluxTally(grid.PatchNames.Count, Scalar.ComponentCount);
@@ -173,26 +155,7 @@ public sealed class StructuredResidualTests
         }
     }
 
-    private static StructuredGrid3D Grid3D(Random random, bool px, bool py, bool pz)
-    {
-        var (xl, xh) = RandomGrids.Sides(px, "x");
-        var (yl, yh) = RandomGrids.Sides(py, "y");
-        var (zl, zh) = RandomGrids.Sides(pz, "z");
-        return new StructuredGrid3D(RandomGrids.Axis(random, 6), RandomGrids.Axis(random, 5), RandomGrids.Axis(random, 4), xl, xh, yl, yh, zl, zh);
-    }
 
-    internal static WaterState[] RandomWater(Random random, int count)
-    {
-        var state = new WaterState[count];
-        for (int c = 0; c < count; c++)
-        {
-            state[c].Depth = 1 + random.NextDouble();
-            state[c].Discharge.X = random.NextDouble() * 2 - 1;
-            state[c].Discharge.Y = random.NextDouble() * 2 - 1;
-        }
-
-        return state;
-    }
 
     private delegate void Run(ReadOnlySpan<Scalar> u, Span<Scalar> r);
 

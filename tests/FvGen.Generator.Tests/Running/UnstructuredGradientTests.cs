@@ -32,7 +32,7 @@ public sealed class UnstructuredGradientTests
         var random = new Random(200 + kind.Length);
         var mesh = Mesh(kind, 3);
         var binding = WaterChecks.RandomBinding(mesh, random);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
         var options = new ParallelOptions { MaxDegreeOfParallelism = 2 };
 
         var serial = new WaterState[mesh.CellCount];
@@ -65,7 +65,7 @@ public sealed class UnstructuredGradientTests
         var mesh = TestMeshes.Square(TestMeshes.Kind2D.Triangles, 48, 9);
         var random = new Random(9);
         var binding = WaterChecks.RandomBinding(mesh, random);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
         byte[]? reference = null;
         foreach (int threads in new[] { 1, 2, 8 })
         {
@@ -86,7 +86,7 @@ public sealed class UnstructuredGradientTests
         // reconstructed value at every face centroid lies between the cell's and its neighbours' extremes.
         var random = new Random(300 + kind.Length);
         var mesh = Mesh(kind, 5);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
         var gradients = new Gradient<WaterState>[mesh.CellCount];
         ShallowWater.LinearSerial(mesh, state, new WaterState[mesh.CellCount], gradients, WaterChecks.RandomBinding(mesh, random), null);
         bool anyLimitedAwayFromZero = false;

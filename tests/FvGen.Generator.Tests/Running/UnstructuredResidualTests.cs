@@ -56,7 +56,7 @@ public sealed class UnstructuredResidualTests
         var random = new Random(100 + kind.Length);
         var mesh = Mesh(kind, 7);
         var binding = WaterChecks.RandomBinding(mesh, random);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
         var serial = new WaterState[mesh.CellCount];
         var serialTally = new BoundaryFluxTally(mesh.PatchNames.Count, WaterState.ComponentCount);
         ShallowWater.Serial(mesh, state, serial, binding, serialTally);
@@ -92,7 +92,7 @@ public sealed class UnstructuredResidualTests
         Assert.True(mesh.InteriorFaceCount > 3 * 2048 && mesh.CellCount > 2 * 2048, "the mesh must span several parallel chunks");
         var random = new Random(5);
         var binding = WaterChecks.RandomBinding(mesh, random);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
         byte[]? reference = null;
         byte[]? referenceColoured = null;
         foreach (int threads in new[] { 1, 2, 8 })

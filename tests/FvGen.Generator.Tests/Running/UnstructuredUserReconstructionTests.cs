@@ -29,7 +29,7 @@ public sealed class UnstructuredUserReconstructionTests
         var random = new Random(300 + kind.Length);
         var mesh = UnstructuredGradientTests.Mesh(kind, 5);
         var binding = WaterChecks.RandomBinding(mesh, random);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
 
         var builtIn = new WaterState[mesh.CellCount];
         var builtInGradients = new Gradient<WaterState>[mesh.CellCount];
@@ -65,7 +65,7 @@ public sealed class UnstructuredUserReconstructionTests
         var random = new Random(310 + kind.Length);
         var mesh = UnstructuredGradientTests.Mesh(kind, 6);
         var binding = WaterChecks.RandomBinding(mesh, random);
-        var state = StructuredResidualTests.RandomWater(random, mesh.CellCount);
+        var state = RandomStates.Water(random, mesh.CellCount);
 
         var firstOrder = new WaterState[mesh.CellCount];
         ShallowWater.Serial(mesh, state, firstOrder, binding, null);

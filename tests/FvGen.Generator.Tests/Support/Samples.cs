@@ -103,6 +103,41 @@ internal static class Samples
         }
         """;
 
+    public const string PatchedMuscl1D = """
+        using System;
+        using FvGen;
+        using FvGen.Boundaries;
+        using FvGen.Geometry;
+        using FvGen.Ledger;
+        using FvGen.Meshes.Structured;
+
+        namespace Demo;
+
+        public static partial class Channel
+        {
+            [NumericalFlux]
+            public static Heat Upwind(in Heat left, in Heat right, in FaceGeometry face) =>
+                new() { Energy = face.Normal.X >= 0 ? face.Normal.X * left.Energy : face.Normal.X * right.Energy };
+
+            [BoundaryFlux(BoundaryKind.Outflow)]
+            public static Heat Away(in Heat inside, in FaceGeometry face) => new() { Energy = face.Normal.X * inside.Energy };
+
+            public static void Slopes(
+                in Heat leftLeft, in Heat left, in Heat right, in Heat rightRight,
+                double widthLeftLeft, double widthLeft, double widthRight, double widthRightRight, out Heat leftFace, out Heat rightFace)
+            {
+                leftFace = new() { Energy = left.Energy + 0.5 * widthLeft * (right.Energy - leftLeft.Energy) / (0.5 * widthLeftLeft + widthLeft + 0.5 * widthRight) };
+                rightFace = new() { Energy = right.Energy - 0.5 * widthRight * (rightRight.Energy - left.Energy) / (0.5 * widthLeft + widthRight + 0.5 * widthRightRight) };
+            }
+
+            [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear, Limiter = LimiterKind.Minmod)]
+            public static partial void Limited(StructuredGrid1D grid, ReadOnlySpan<Heat> state, Span<Heat> rate, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+
+            [ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(Slopes))]
+            public static partial void Central(StructuredGrid1D grid, ReadOnlySpan<Heat> state, Span<Heat> rate, BoundaryBinding<Boundary> boundaries, BoundaryFluxTally? tally);
+        }
+        """;
+
     public const string Gather2D = """
         using System;
         using System.Threading.Tasks;
