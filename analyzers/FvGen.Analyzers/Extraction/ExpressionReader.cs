@@ -239,7 +239,7 @@ internal sealed class ExpressionReader
 
                 return (local.Local.Name, WithDefinitions(local.Local.Name, RoleOfType(local.Local.Type)));
             case IParameterReferenceOperation parameter:
-                return (parameter.Parameter.Name, WithDefinitions(parameter.Parameter.Name, Known.HasAttribute(parameter.Parameter, Known.FaceData) ? DataRole.Face : RoleOfType(parameter.Parameter.Type)));
+                return (parameter.Parameter.Name, WithDefinitions(parameter.Parameter.Name, Known.HasAttribute(parameter.Parameter, Known.FaceData) || _method.FaceParameters.Contains(parameter.Parameter) ? DataRole.Face : RoleOfType(parameter.Parameter.Type)));
             case IFieldReferenceOperation field:
             {
                 string name = Name(field);
@@ -258,6 +258,12 @@ internal sealed class ExpressionReader
 
                 string name = Name(property);
                 var role = Known.HasAttribute(property.Property, Known.FaceData) ? DataRole.Face : RoleOfType(property.Property.Type);
+                if (property.Property.Name == "Span" && property.Instance is { Type: INamedTypeSymbol { Name: "Memory" or "ReadOnlyMemory", ContainingNamespace.Name: "System" } })
+                {
+                    // memory.Span is the memory's own storage: face data when the memory is.
+                    role = ArrayRoot(property.Instance).Role;
+                }
+
                 if (property.Instance?.Type is { } owner && SymbolEqualityComparer.Default.Equals(owner, Known.UnstructuredMesh)
                     && property.Property.Name.StartsWith("Face", StringComparison.Ordinal)
                     && property.Property.Name is not ("FaceLeft" or "FaceRight" or "FaceNodes" or "FaceNodeOffsets"))

@@ -27,7 +27,18 @@ internal sealed class MethodContext
     /// The context of a local function of this method: the same symbols, origins and issue list, but
     /// face arrays of its own (its loops fill and read its own buffers).
     /// </summary>
-    public MethodContext ForLocalFunction() => new(Known, Purity, ContainingType, Origins, Issues, _impureReported);
+    public MethodContext ForLocalFunction(IEnumerable<IParameterSymbol> faceParameters)
+    {
+        var context = new MethodContext(Known, Purity, ContainingType, Origins, Issues, _impureReported);
+        context.FaceParameters.UnionWith(faceParameters);
+        return context;
+    }
+
+    /// <summary>
+    /// Parameters of a local function that every call in the enclosing body passes face data
+    /// (a <c>[FaceData]</c> buffer handed down by the generator's face passes): face data inside it too.
+    /// </summary>
+    public HashSet<IParameterSymbol> FaceParameters { get; } = new(SymbolEqualityComparer.Default);
 
     public KnownSymbols Known { get; }
 
