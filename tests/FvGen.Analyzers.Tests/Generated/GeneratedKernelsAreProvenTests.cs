@@ -48,6 +48,10 @@ public sealed class GeneratedKernelsAreProvenTests
             [BoundaryFlux(BoundaryKind.Wall)]
             public static Coolant Shell(in Coolant inside, in FaceGeometry face) => default;
 
+            // Half a cell along the limited gradient, as a user reconstruction on an unstructured mesh.
+            public static void HalfSlope(in Coolant cell, in Gradient<Coolant> gradient, in Vec3 toFace, out Coolant faceState) =>
+                faceState = cell + 0.5 * (toFace.X * gradient.X + toFace.Y * gradient.Y + toFace.Z * gradient.Z);
+
             // Fromm's central slope as a user reconstruction (LeVeque 2002, §6.5): each face sees its two cells extrapolated half a cell.
             public static void Fromm(in Coolant leftLeft, in Coolant left, in Coolant right, in Coolant rightRight, out Coolant leftFace, out Coolant rightFace)
             {
@@ -92,6 +96,11 @@ public sealed class GeneratedKernelsAreProvenTests
     {
         // Each cell sums its low and high faces from the face buffer; the high face of the last cell
         // wraps to the first on a periodic axis, so its index is chosen by a condition in a cell loop.
+        // Second order on unstructured meshes: the face states are built with the runtime's Vec3 arithmetic
+        // (metadata, so not visibly component-wise), and Green-Gauss sums gradient components in struct locals.
+        { "unstructured Barth-Jespersen", "[ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear)] public static partial void Residual(UnstructuredMesh mesh, ReadOnlySpan<Coolant> state, Span<Coolant> rate, Span<Gradient<Coolant>> gradients, BoundaryBinding<Boundary> boundaries);", "`Vec3.operator -(Vec3, Vec3)` is not visibly component-wise" },
+        { "unstructured user reconstruction", "[ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(HalfSlope))] public static partial void Residual(UnstructuredMesh mesh, ReadOnlySpan<Coolant> state, Span<Coolant> rate, Span<Gradient<Coolant>> gradients, BoundaryBinding<Boundary> boundaries);", "`Vec3.operator -(Vec3, Vec3)` is not visibly component-wise" },
+        { "unstructured gather Barth-Jespersen", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather, Reconstruction = ReconstructionKind.Linear)] public static partial void Residual(UnstructuredMesh mesh, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, Memory<Gradient<Coolant>> gradients, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "`Vec3.operator -(Vec3, Vec3)` is not visibly component-wise" },
         { "1-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid1D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "the index `xHigh` is chosen by a condition" },
         { "2-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid2D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "is chosen by a condition" },
         { "3-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid3D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "is chosen by a condition" },
