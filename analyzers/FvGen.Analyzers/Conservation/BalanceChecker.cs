@@ -30,7 +30,7 @@ internal static class BalanceChecker
             var writes = group.ToList();
             if (writes.Select(w => w.SubscriptKey).Distinct().Count() > 1)
             {
-                findings.AddRange(CheckFaceLoop(update.Space, writes));
+                findings.AddRange(CheckFaceLoop(update.Space, writes, update.Writes.Select(w => w.Array)));
             }
             else
             {
@@ -279,13 +279,13 @@ internal static class BalanceChecker
             : false);
     }
 
-    private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes)
+    private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes, IEnumerable<string> writtenByLoop)
     {
         var weighted = FaceLoopWeighted(writes);
         var all = weighted.SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
         var opaque = all.Where(t => ExprTree.FirstOpaque(t.Term) is not null).ToList();
         var terms = all.Where(t => ExprTree.FirstOpaque(t.Term) is null).ToList();
-        foreach (var finding in CheckOpaqueFaceValues(writes, opaque))
+        foreach (var finding in CheckOpaqueFaceValues(writes, opaque, writtenByLoop))
         {
             yield return finding;
         }
@@ -337,7 +337,7 @@ internal static class BalanceChecker
     /// face from data the loop does not write) given to the two cells of the iteration with opposite
     /// weights. Then the face adds nothing to the total, whatever the value is.
     /// </summary>
-    private static IEnumerable<Finding> CheckOpaqueFaceValues(List<UpdateWrite> writes, List<AttributedTerm> opaque)
+    private static IEnumerable<Finding> CheckOpaqueFaceValues(List<UpdateWrite> writes, List<AttributedTerm> opaque, IEnumerable<string> writtenByLoop)
     {
         if (opaque.Count == 0)
         {
@@ -350,7 +350,7 @@ internal static class BalanceChecker
             throw new ModelLimitException(first.Reason + ", and the loop does not write one face value to exactly two cells");
         }
 
-        var written = new HashSet<string>(writes.Select(w => w.Array), StringComparer.Ordinal);
+        var written = new HashSet<string>(writtenByLoop, StringComparer.Ordinal);
         foreach (var t in opaque)
         {
             var read = ExprTree.All(t.Term).OfType<OpaqueReadExpr>().FirstOrDefault(q => q.Arrays.Any(written.Contains));

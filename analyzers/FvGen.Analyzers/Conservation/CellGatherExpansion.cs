@@ -30,6 +30,7 @@ internal static class CellGatherExpansion
         var cellWrites = new List<UpdateWrite>();
         var faceWrites = new List<UpdateWrite>();
         string? faceVariable = null;
+        string? faceLoop = null;
         foreach (var group in update.Writes.GroupBy(w => w.TargetKey))
         {
             // Writes overwritten by a later assignment that does not read the element never reach the total.
@@ -64,11 +65,12 @@ internal static class CellGatherExpansion
                     }
 
                     var g = gathers[0];
-                    if (faceVariable is not null && faceVariable != g.FaceVariable)
+                    if (faceLoop is not null && faceLoop != g.FaceLoopKey)
                     {
-                        throw new ModelLimitException("the loop gathers over two different face lists");
+                        throw new ModelLimitException("the loop gathers over two different face lists, or compares the cell with different face maps");
                     }
 
+                    faceLoop = g.FaceLoopKey;
                     faceVariable = g.FaceVariable;
                     if (w.Subscripts.Length != 1 || w.Subscripts[0].Length != 1
                         || w.Subscripts[0][0] is not AffineSubscript { Index: var cell }

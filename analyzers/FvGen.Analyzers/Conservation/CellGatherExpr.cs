@@ -13,19 +13,23 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class CellGatherExpr : Expr
 {
-    public CellGatherExpr(string cellVariable, string faceVariable, string leftMap, string rightMap, SumExpr left, SumExpr right)
+    public CellGatherExpr(string cellVariable, string faceList, string faceVariable, string leftMap, string rightMap, SumExpr left, SumExpr right)
     {
         CellVariable = cellVariable;
+        FaceList = faceList;
         FaceVariable = faceVariable;
         LeftMap = leftMap;
         RightMap = rightMap;
         Left = left;
         Right = right;
-        Key = "G:" + cellVariable + "|" + faceVariable + "|" + leftMap + "|" + rightMap + "(" + left.Key + "|" + right.Key + ")";
+        Key = "G:" + cellVariable + "|" + faceList + "|" + faceVariable + "|" + leftMap + "|" + rightMap + "(" + left.Key + "|" + right.Key + ")";
     }
 
     /// <summary>The loop variable of the cell loop (<c>c</c>).</summary>
     public string CellVariable { get; }
+
+    /// <summary>The cell-to-face list summed over (<c>offsets/faces</c>, or the per-cell lists).</summary>
+    public string FaceList { get; }
 
     /// <summary>The name the face gets in the equivalent face loop (<c>f</c>).</summary>
     public string FaceVariable { get; }
@@ -42,6 +46,9 @@ internal sealed class CellGatherExpr : Expr
     public override string Key { get; }
 
     public override string ShapeKey => Key;
+
+    /// <summary>The face loop this gather sums to: two gathers may share one only when it is the same.</summary>
+    public string FaceLoopKey => FaceList + "|" + FaceVariable + "|" + LeftMap + "|" + RightMap;
 
     /// <summary>The face data read by either side: it keeps the sum from ever passing for a source of the cell.</summary>
     public override IEnumerable<ReadExpr> Reads => Left.Reads.Concat(Right.Reads);

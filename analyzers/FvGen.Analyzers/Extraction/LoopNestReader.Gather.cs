@@ -25,13 +25,14 @@ internal sealed partial class LoopNestReader
         IOperation body;
         ISymbol? cell;
         string? cellVariable;
+        string? list;
         switch (loop)
         {
-            case IForLoopOperation f when CompressedRowHeader(f, out cell, out cellVariable, out position):
+            case IForLoopOperation f when CompressedRowHeader(f, out cell, out cellVariable, out position, out list):
                 body = f.Body;
                 break;
             case IForEachLoopOperation fe when fe.Locals.Length == 1 && ExpressionReader.IsIntegral(fe.Locals[0].Type)
-                && CellElement(StripConversions(fe.Collection), 0, out cell, out cellVariable, out _):
+                && CellElement(StripConversions(fe.Collection), 0, out cell, out cellVariable, out list):
                 faceLocal = fe.Locals[0];
                 body = fe.Body;
                 break;
@@ -47,6 +48,8 @@ internal sealed partial class LoopNestReader
             {
                 return false;
             }
+
+            list += "/" + facesRoot;
         }
 
         if (_variables.FirstOrDefault(v => v.Name == cellVariable) is not { Kind: LoopVariableKind.Lattice })
@@ -112,7 +115,7 @@ internal sealed partial class LoopNestReader
             var value = ((ValueBinding)before[a]).Value;
             if (!left.IsZero || !right.IsZero)
             {
-                value += SumExpr.Factor(new CellGatherExpr(cellVariable!, faceVariable, leftMap, rightMap, left, right), _method.Origins.Add(loop.Syntax));
+                value += SumExpr.Factor(new CellGatherExpr(cellVariable!, list!, faceVariable, leftMap, rightMap, left, right), _method.Origins.Add(loop.Syntax));
             }
 
             _reader.Bindings[a] = new ValueBinding(value);
@@ -127,11 +130,12 @@ internal sealed partial class LoopNestReader
     }
 
     /// <summary><c>for (int n = offsets[c]; n &lt; offsets[c + 1]; n++)</c>: the faces of cell <c>c</c> in a compressed-row list.</summary>
-    private bool CompressedRowHeader(IForLoopOperation loop, out ISymbol? cell, out string? cellVariable, out ISymbol? position)
+    private bool CompressedRowHeader(IForLoopOperation loop, out ISymbol? cell, out string? cellVariable, out ISymbol? position, out string? offsets)
     {
         cell = null;
         cellVariable = null;
         position = null;
+        offsets = null;
         if (loop.Before.Length != 1 || loop.AtLoopBottom.Length != 1 || loop.Condition is not IBinaryOperation { OperatorKind: BinaryOperatorKind.LessThan } condition)
         {
             return false;
@@ -144,7 +148,7 @@ internal sealed partial class LoopNestReader
             _ => null,
         };
         if (start is not { } s
-            || !CellElement(StripConversions(s.Value), 0, out cell, out cellVariable, out var offsets)
+            || !CellElement(StripConversions(s.Value), 0, out cell, out cellVariable, out offsets)
             || StripConversions(condition.LeftOperand) is not ILocalReferenceOperation bound || !SymbolEqualityComparer.Default.Equals(bound.Local, s.Local)
             || !CellElement(StripConversions(condition.RightOperand), 1, out var endCell, out _, out var endOffsets)
             || !SymbolEqualityComparer.Default.Equals(cell, endCell) || offsets != endOffsets

@@ -17,7 +17,7 @@ public sealed class CellGatherAndOpaqueValueTests
     private static SumExpr Flux => Face("flux", At("f"));
 
     private static SumExpr Gather(SumExpr left, SumExpr right, string leftMap = "faceLeft", string? rightMap = null) =>
-        SumExpr.Factor(new CellGatherExpr("c", "f", leftMap, rightMap ?? CellGatherExpr.OtherSide(leftMap), left, right));
+        SumExpr.Factor(new CellGatherExpr("c", "start/faces", "f", leftMap, rightMap ?? CellGatherExpr.OtherSide(leftMap), left, right));
 
     /// <summary><c>u[k &gt;= 0 ? k : i - 1]</c>, with <c>k</c> itself a conditional of <c>i</c>.</summary>
     private static SumExpr FarNeighbour(long offset)
@@ -67,6 +67,14 @@ public sealed class CellGatherAndOpaqueValueTests
     public void GatherWrittenToAnotherCellIsNotModelled()
     {
         Assert.Throws<ModelLimitException>(() => Check(C, Assign("res", Cell(At("c", 1)), Gather(-Flux, Flux))));
+    }
+
+    [Fact]
+    public void GathersOverTwoDifferentListsAreNotMerged()
+    {
+        // Two inner loops over different lists are not one face loop, even with equal names inside.
+        var other = SumExpr.Factor(new CellGatherExpr("c", "nodeStart/nodes", "f", "faceLeft", CellGatherExpr.OtherSide("faceLeft"), Flux, -Flux));
+        Assert.Throws<ModelLimitException>(() => Check(C, Assign("res", Cell(At("c")), Gather(-Flux, Flux) + other)));
     }
 
     [Fact]
