@@ -215,10 +215,13 @@ internal sealed partial class LoopNestReader
         }
     }
 
-    /// <summary>The list the position variable reads (<c>faces</c> in <c>faces[n]</c>); every use of it must be such a read.</summary>
+    /// <summary>
+    /// The list the position variable reads (<c>faces</c> in <c>faces[n]</c>): the one whose element is
+    /// used as a face (held in a local, or used as a subscript). Every use of the position must read it.
+    /// </summary>
     private string? FacesRoot(IOperation body, ISymbol position)
     {
-        string? root = null;
+        var uses = new List<(IOperation Element, string? Root, bool AsFace)>();
         foreach (var use in body.Descendants().OfType<ILocalReferenceOperation>().Where(l => SymbolEqualityComparer.Default.Equals(l.Local, position)))
         {
             var element = use.Parent is IConversionOperation c ? c.Parent : use.Parent;
@@ -233,26 +236,37 @@ internal sealed partial class LoopNestReader
                 IPropertyReferenceOperation { Property.IsIndexer: true, Arguments.Length: 1, Instance: { } instance } => instance,
                 _ => null,
             };
-            string? here = null;
+            string? root = null;
             try
             {
-                here = receiver is null ? null : _reader.ArrayRoot(receiver).Root;
+                root = receiver is null ? null : _reader.ArrayRoot(receiver).Root;
             }
             catch (NotModelledException)
             {
             }
 
-            if (here is null || (root is not null && here != root))
-            {
-                throw new NotModelledException(
-                    $"the position `{position.Name}` in the face list is read as `{ExpressionReader.Short((element ?? use).Syntax)}`, not only to take the face from the list; the side of a face is read only from a comparison of the cell with a face-to-cell map",
-                    (element ?? use).Syntax);
-            }
-
-            root = here;
+            var parent = element?.Parent is IConversionOperation up ? up.Parent : element?.Parent;
+            bool asFace = parent is IVariableInitializerOperation or IArrayElementReferenceOperation || parent is IArgumentOperation { Parent: IPropertyReferenceOperation { Property.IsIndexer: true } };
+            uses.Add((element ?? use, root, asFace));
         }
 
-        return root;
+        if (uses.Count == 0)
+        {
+            return null;
+        }
+
+        var faceRoots = uses.Where(u => u.AsFace && u.Root is not null).Select(u => u.Root).Distinct().ToList();
+        string? faces = faceRoots.Count == 1 ? faceRoots[0] : uses.Select(u => u.Root).Distinct().Count() == 1 ? uses[0].Root : null;
+        var stray = uses.FirstOrDefault(u => u.Root is null || u.Root != faces);
+        if (faces is null || stray.Element is not null)
+        {
+            var at = (stray.Element ?? uses[0].Element).Syntax;
+            throw new NotModelledException(
+                $"the position `{position.Name}` in the face list is read as `{ExpressionReader.Short(at)}`, not only to take the face from the list; the side of a face is read only from a comparison of the cell with a face-to-cell map",
+                at);
+        }
+
+        return faces;
     }
 
     /// <summary>The name of the local holding the face (<c>int f = faces[n];</c>), if there is one.</summary>
