@@ -322,6 +322,15 @@ internal sealed class ExpressionReader
         var read = target.ToRead();
         if (read.AllSubscripts.All(s => s is AffineSubscript a && a.Index.IsConstant))
         {
+            if (read.Subscripts.Length == 1 && read.Subscripts[0].Length == 1 && read.Path.Length == 0
+                && _method.ConstantTables.TryGetValue(read.Array, out var table)
+                && ((AffineSubscript)read.Subscripts[0][0]).Index.Constant is { IsConstant: true } k
+                && k.ConstantValue.IsInteger && k.ConstantValue.Numerator >= 0 && k.ConstantValue.Numerator < table.Length)
+            {
+                // An entry of a table of constants nothing changes is that constant.
+                return SumExpr.Invariant(SymPoly.Constant(table[(int)k.ConstantValue.Numerator]));
+            }
+
             // A fixed element (a ghost value, a coefficient table entry) is loop-invariant.
             return SumExpr.Invariant(SymPoly.Symbol(read.Render()));
         }

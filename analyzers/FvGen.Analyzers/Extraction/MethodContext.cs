@@ -56,6 +56,9 @@ internal sealed class MethodContext
 
     public List<ConservationIssue> Issues { get; }
 
+    /// <summary>Local arrays of constants nothing in the method changes (<see cref="ConstantTables"/>), by name.</summary>
+    public Dictionary<string, ImmutableArray<Conservation.Rational>> ConstantTables { get; } = new(System.StringComparer.Ordinal);
+
     private readonly HashSet<IMethodSymbol> _impureReported;
 
     public void ReportImpureCall(IInvocationOperation invocation, IMethodSymbol method, Purity purity)

@@ -78,6 +78,11 @@ internal static class MethodReader
     {
         var nests = new List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)>();
         var outer = new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default);
+        foreach (var (name, values) in ConstantTables.Find(body))
+        {
+            method.ConstantTables[name] = values;
+        }
+
         Walk(body, outer, nests, method, localFunctions);
 
         MarkDefinitions(nests, method);

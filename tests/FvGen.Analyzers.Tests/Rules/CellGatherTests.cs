@@ -58,6 +58,7 @@ public sealed class CellGatherTests
         { "CSR, both maps named", CompressedRow.Replace("__BODY__", "if (faceLeft[f] == c) sum -= flux[f]; else if (faceRight[f] == c) sum += flux[f];") },
         { "CSR, sign local from the right map", CompressedRow.Replace("__BODY__", "double s = faceRight[f] == c ? 1.0 : -1.0; sum += s * flux[f];") },
         { "per-cell list, conditional expression", PerCellList.Replace("__BODY__", "sum += c == faceLeft[f] ? -flux[f] : flux[f];") },
+        { "CSR, sign from a table of constants", CompressedRow.Replace("for (int c = 0;", "double[] sideSign = { -1.0, 1.0 }; for (int c = 0;").Replace("__BODY__", "sum += sideSign[faceLeft[f] == c ? 0 : 1] * flux[f];") },
         { "per-cell list, != test", PerCellList.Replace("__BODY__", "if (faceLeft[f] != c) sum += flux[f]; else sum -= flux[f];") },
     };
 
@@ -68,6 +69,9 @@ public sealed class CellGatherTests
         { "CSR, both plus", CompressedRow.Replace("__BODY__", "if (faceLeft[f] == c) sum += flux[f]; else sum += flux[f];"), DiagnosticIds.OneSidedScatter },
         { "CSR, right side dropped", CompressedRow.Replace("__BODY__", "if (faceLeft[f] == c) sum -= flux[f];"), DiagnosticIds.OneSidedScatter },
         { "per-cell list, left side dropped", PerCellList.Replace("__BODY__", "if (faceRight[f] == c) sum += flux[f];"), DiagnosticIds.OneSidedScatter },
+        { "CSR, table of constants with equal signs", CompressedRow.Replace("for (int c = 0;", "double[] sideSign = { 1.0, 1.0 }; for (int c = 0;").Replace("__BODY__", "sum += sideSign[faceLeft[f] == c ? 0 : 1] * flux[f];"), DiagnosticIds.OneSidedScatter },
+        // A table the method writes is no table of constants: its entries stay symbols, whose sum is not known to vanish.
+        { "CSR, sign table written in the method", CompressedRow.Replace("for (int c = 0;", "double[] sideSign = { -1.0, 1.0 }; sideSign[1] = -1.0; for (int c = 0;").Replace("__BODY__", "sum += sideSign[faceLeft[f] == c ? 0 : 1] * flux[f];"), DiagnosticIds.OneSidedScatter },
         { "per-cell list, half weight on one side", PerCellList.Replace("__BODY__", "sum += c == faceLeft[f] ? -flux[f] : 0.5 * flux[f];"), DiagnosticIds.OneSidedScatter },
     };
 
