@@ -71,5 +71,6 @@ internal static class ConstantTables
             .Where(l => SymbolEqualityComparer.Default.Equals(l.Local, table))
             .All(l => l.Parent is IArrayElementReferenceOperation element && ReferenceEquals(element.ArrayReference, l)
                 && !(element.Parent is IAssignmentOperation a && ReferenceEquals(a.Target, element))
-                && element.Parent is not (IIncrementOrDecrementOperation or IArgumentOperation { Parameter.RefKind: not RefKind.None and not RefKind.In }));
+                && element.Parent is not (IIncrementOrDecrementOperation or IArgumentOperation { Parameter.RefKind: not RefKind.None and not RefKind.In })
+                && element.Parent is not (IVariableInitializerOperation { Parent: IVariableDeclaratorOperation { Symbol.IsRef: true } } or ISimpleAssignmentOperation { IsRef: true }));
 }
