@@ -55,11 +55,11 @@ internal static class BalanceChecker
 
     private static IEnumerable<Finding> CheckCellLoop(LoopSpace space, List<UpdateWrite> writes)
     {
-        if (writes.SelectMany(w => w.Value.Terms).Select(ExprTree.FirstOpaque).FirstOrDefault(q => q is not null) is { } opaque)
+        if (writes.SelectMany(w => w.Value.Terms).FirstOrDefault(t => ExprTree.FirstOpaque(t) is not null) is { } opaque)
         {
             // A value read at a subscript the checker does not model is accepted only as a face value
             // balanced between the two cells of one face.
-            throw new ModelLimitException(opaque.Reason);
+            throw new ModelLimitException(ExprTree.FirstOpaque(opaque)!.Reason, opaque.Origins.IsEmpty ? -1 : opaque.Origins[0]);
         }
 
         var live = new List<UpdateWrite>();
@@ -347,7 +347,7 @@ internal static class BalanceChecker
         var first = ExprTree.FirstOpaque(opaque[0].Term)!;
         if (writes.Select(w => w.SubscriptKey).Distinct().Count() != 2)
         {
-            throw new ModelLimitException(first.Reason + ", and the loop does not write one face value to exactly two cells");
+            throw new ModelLimitException(first.Reason + ", and the loop does not write one face value to exactly two cells", opaque[0].Term.Origins.IsEmpty ? -1 : opaque[0].Term.Origins[0]);
         }
 
         var written = new HashSet<string>(writtenByLoop, StringComparer.Ordinal);

@@ -77,11 +77,13 @@ internal sealed class MethodContext
             ImmutableDictionary<string, string?>.Empty));
     }
 
-    public void ReportNotAnalyzed(string reason, SyntaxNode where) =>
+    public void ReportNotAnalyzed(string reason, SyntaxNode where) => ReportNotAnalyzed(reason, where.GetLocation());
+
+    public void ReportNotAnalyzed(string reason, Location where) =>
         Issues.Add(new ConservationIssue(
             DiagnosticIds.NotAnalyzed,
             ImmutableArray.Create(reason),
-            where.GetLocation(),
+            where,
             ImmutableArray<Location>.Empty,
             ImmutableDictionary<string, string?>.Empty));
 }

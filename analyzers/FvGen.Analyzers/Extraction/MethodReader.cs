@@ -109,7 +109,7 @@ internal static class MethodReader
             }
             catch (ModelLimitException e)
             {
-                method.ReportNotAnalyzed(e.Message, loop.Syntax);
+                method.ReportNotAnalyzed(e.Message, method.Origins[e.Origin] ?? loop.Syntax.GetLocation());
             }
         }
     }
