@@ -51,8 +51,29 @@ public sealed class CellGatherTests
         }
         """;
 
+    private const string ParallelCells = """
+        static class Gather
+        {
+            [ConservativeUpdate]
+            public static void Rate(int[] faceLeft, int[][] facesOfCell, [FaceData] double[] flux, double[] res)
+            {
+                Parallel.For(0, res.Length, c =>
+                {
+                    double sum = 0;
+                    foreach (int f in facesOfCell[c])
+                    {
+                        __BODY__
+                    }
+
+                    res[c] = sum;
+                });
+            }
+        }
+        """;
+
     public static TheoryData<string, string> Conservative => new()
     {
+        { "Parallel.For over cells, per-cell list", ParallelCells.Replace("__BODY__", "if (faceLeft[f] == c) sum -= flux[f]; else sum += flux[f];") },
         { "CSR, if on the left map", CompressedRow.Replace("__BODY__", "if (faceLeft[f] == c) sum -= flux[f]; else sum += flux[f];") },
         { "CSR, face read inline", CompressedRow.Replace("int f = cellFaces[n];", string.Empty).Replace("__BODY__", "if (c == faceLeft[cellFaces[n]]) sum -= flux[cellFaces[n]]; else sum += flux[cellFaces[n]];") },
         { "CSR, both maps named", CompressedRow.Replace("__BODY__", "if (faceLeft[f] == c) sum -= flux[f]; else if (faceRight[f] == c) sum += flux[f];") },
@@ -64,6 +85,7 @@ public sealed class CellGatherTests
 
     public static TheoryData<string, string, string> Broken => new()
     {
+        { "Parallel.For over cells, both plus", ParallelCells.Replace("__BODY__", "sum += flux[f];"), DiagnosticIds.OneSidedScatter },
         // Both sides take the flux away: each face loses it twice.
         { "CSR, both minus", CompressedRow.Replace("__BODY__", "sum -= flux[f];"), DiagnosticIds.OneSidedScatter },
         { "CSR, both plus", CompressedRow.Replace("__BODY__", "if (faceLeft[f] == c) sum += flux[f]; else sum += flux[f];"), DiagnosticIds.OneSidedScatter },
