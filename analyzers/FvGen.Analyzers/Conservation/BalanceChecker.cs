@@ -15,6 +15,14 @@ internal static class BalanceChecker
 {
     public static ImmutableArray<Finding> Check(LoopUpdate update)
     {
+        if (CellGatherExpansion.Split(update) is { } gathered)
+        {
+            // A cell loop gathering its faces is checked as the face loop it sums to (and whatever else it writes, as before).
+            var parts = gathered.Cells is null ? ImmutableArray<Finding>.Empty : Check(gathered.Cells);
+            return parts.AddRange(Check(gathered.Faces));
+        }
+
+        RejectNested(update);
         var findings = new List<Finding>();
         findings.AddRange(InPlaceSweeps(update));
         foreach (var group in update.Writes.GroupBy(w => w.Array + "|" + w.Path))
@@ -22,7 +30,7 @@ internal static class BalanceChecker
             var writes = group.ToList();
             if (writes.Select(w => w.SubscriptKey).Distinct().Count() > 1)
             {
-                findings.AddRange(CheckFaceLoop(update.Space, writes));
+                findings.AddRange(CheckFaceLoop(update.Space, writes, update.Writes.Select(w => w.Array)));
             }
             else
             {
@@ -33,8 +41,27 @@ internal static class BalanceChecker
         return findings.ToImmutableArray();
     }
 
+    /// <summary>A gathered sum hidden inside a call or a reciprocal cannot be rewritten as a face loop.</summary>
+    private static void RejectNested(LoopUpdate update)
+    {
+        foreach (var t in update.Writes.SelectMany(w => w.Value.Terms))
+        {
+            if (ExprTree.All(t).Any(e => e is CellGatherExpr))
+            {
+                throw new ModelLimitException("a sum gathered over the face list is used inside `" + Text.Short(t.RenderBody()) + "`, not added to the cell");
+            }
+        }
+    }
+
     private static IEnumerable<Finding> CheckCellLoop(LoopSpace space, List<UpdateWrite> writes)
     {
+        if (writes.SelectMany(w => w.Value.Terms).FirstOrDefault(t => ExprTree.FirstOpaque(t) is not null) is { } opaque)
+        {
+            // A value read at a subscript the checker does not model is accepted only as a face value
+            // balanced between the two cells of one face.
+            throw new ModelLimitException(ExprTree.FirstOpaque(opaque)!.Reason, opaque.Origins.IsEmpty ? -1 : opaque.Origins[0]);
+        }
+
         var live = new List<UpdateWrite>();
         foreach (var w in writes)
         {
@@ -252,10 +279,17 @@ internal static class BalanceChecker
             : false);
     }
 
-    private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes)
+    private static IEnumerable<Finding> CheckFaceLoop(LoopSpace space, List<UpdateWrite> writes, IEnumerable<string> writtenByLoop)
     {
         var weighted = FaceLoopWeighted(writes);
-        var terms = weighted.SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
+        var all = weighted.SelectMany(x => x.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, x.Write))).ToList();
+        var opaque = all.Where(t => ExprTree.FirstOpaque(t.Term) is not null).ToList();
+        var terms = all.Where(t => ExprTree.FirstOpaque(t.Term) is null).ToList();
+        foreach (var finding in CheckOpaqueFaceValues(writes, opaque, writtenByLoop))
+        {
+            yield return finding;
+        }
+
         bool found = false;
         foreach (var c in ShiftClass.Build(terms, space))
         {
@@ -293,6 +327,55 @@ internal static class BalanceChecker
                     yield return OneSided(c, "within one face it goes to " + string.Join(" and to ", byCell) + ", which sum to " + c.Sum + ", not 0; the cell in front must receive what the cell behind gives");
                     yield break;
                 }
+            }
+        }
+    }
+
+    /// <summary>
+    /// Face values read partly at subscripts the checker does not model. Their value is not known, so
+    /// they must balance within one face: the same value (the same expression, evaluated once per
+    /// face from data the loop does not write) given to the two cells of the iteration with opposite
+    /// weights. Then the face adds nothing to the total, whatever the value is.
+    /// </summary>
+    private static IEnumerable<Finding> CheckOpaqueFaceValues(List<UpdateWrite> writes, List<AttributedTerm> opaque, IEnumerable<string> writtenByLoop)
+    {
+        if (opaque.Count == 0)
+        {
+            yield break;
+        }
+
+        var first = ExprTree.FirstOpaque(opaque[0].Term)!;
+        if (writes.Select(w => w.SubscriptKey).Distinct().Count() != 2)
+        {
+            throw new ModelLimitException(first.Reason + ", and the loop does not write one face value to exactly two cells", opaque[0].Term.Origins.IsEmpty ? -1 : opaque[0].Term.Origins[0]);
+        }
+
+        var written = new HashSet<string>(writtenByLoop, StringComparer.Ordinal);
+        foreach (var t in opaque)
+        {
+            var read = ExprTree.All(t.Term).OfType<OpaqueReadExpr>().FirstOrDefault(q => q.Arrays.Any(written.Contains));
+            if (read is not null || t.Term.Reads.Any(r => written.Contains(r.Array)))
+            {
+                throw new ModelLimitException(first.Reason + ", and the face value reads the array the loop writes");
+            }
+        }
+
+        var oneFace = new LoopSpace(ImmutableArray<LoopVariable>.Empty);
+        foreach (var c in ShiftClass.Build(opaque, oneFace))
+        {
+            if (!c.Sum.IsZero)
+            {
+                var byCell = c.Members.GroupBy(m => m.Source.Write.SubscriptKey)
+                    .Select(g => g.First().Source.Write.RenderTarget() + " with weight " + g.Aggregate(SymPoly.Zero, (sum, m) => sum + m.Weight))
+                    .ToList();
+                string detail = byCell.Count == 1
+                    ? "within one face it goes to " + byCell[0] + " and to no other cell; the other cell of the face must receive the opposite weight"
+                    : "within one face it goes to " + string.Join(" and to ", byCell) + ", which sum to " + c.Sum + ", not 0; the cell in front must receive what the cell behind gives";
+                yield return OneSided(c, detail);
+            }
+            else if (c.Members.Select(m => m.Source.Write.SubscriptKey).Distinct().Count() == 1)
+            {
+                yield return SelfCancelling(c, c.Representative.Write);
             }
         }
     }

@@ -8,8 +8,12 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class ModelLimitException : Exception
 {
-    public ModelLimitException(string reason)
+    public ModelLimitException(string reason, int origin = -1)
         : base(reason)
     {
+        Origin = origin;
     }
+
+    /// <summary>Origin of the term that went beyond the model, or -1 (the loop is then the location).</summary>
+    public int Origin { get; }
 }

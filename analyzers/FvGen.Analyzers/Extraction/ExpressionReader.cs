@@ -31,6 +31,18 @@ internal sealed class ExpressionReader
 
     public KnownSymbols Known => _method.Known;
 
+    /// <summary>Set while the loop over one cell's faces is read for one side of the face (a gather).</summary>
+    public GatherSide? Gather { get; set; }
+
+    private static readonly string TrueKey = SumExpr.Invariant(SymPoly.Symbol("true")).Key;
+    private static readonly string FalseKey = SumExpr.Invariant(SymPoly.Symbol("false")).Key;
+
+    /// <summary>True or false when the condition is a constant (a literal, or the side test of a gather); null otherwise.</summary>
+    public static bool? ConstantCondition(SumExpr condition) =>
+        condition.Key == TrueKey ? true : condition.Key == FalseKey ? false : null;
+
+    private static SumExpr Bool(bool value) => SumExpr.Invariant(SymPoly.Symbol(value ? "true" : "false"));
+
     public SumExpr Read(IOperation operation)
     {
         switch (operation)
@@ -49,6 +61,8 @@ internal sealed class ExpressionReader
                 return -Read(unary.Operand);
             case IUnaryOperation unary when unary.OperatorKind == UnaryOperatorKind.Plus:
                 return Read(unary.Operand);
+            case IUnaryOperation { OperatorKind: UnaryOperatorKind.Not } not when Gather is not null && ConstantCondition(Read(not.Operand)) is bool operand:
+                return Bool(!operand);
             case IUnaryOperation unary:
                 return Opaque(unary.OperatorKind.ToString(), unary.Syntax, Read(unary.Operand));
             case ILocalReferenceOperation local:
@@ -65,6 +79,10 @@ internal sealed class ExpressionReader
                 return ReadMember(operation);
             case IInvocationOperation invocation:
                 return ReadCall(invocation);
+            case IConditionalOperation { WhenFalse: not null } conditional when Gather is not null:
+                return ConstantCondition(Read(conditional.Condition)) is bool taken
+                    ? Read(taken ? conditional.WhenTrue : conditional.WhenFalse)
+                    : throw new NotModelledException($"the term gathered from the face depends on `{Short(conditional.Condition.Syntax)}`, a condition other than the side of the face the cell is on", conditional.Syntax);
             case IConditionalOperation { WhenFalse: not null } conditional:
                 return Opaque("?:", conditional.Syntax, Read(conditional.Condition), Read(conditional.WhenTrue), Read(conditional.WhenFalse));
             case IDefaultValueOperation:
@@ -110,6 +128,14 @@ internal sealed class ExpressionReader
                     mapped = new MappedSubscript(r.Array + "∘" + inner.Map, inner.Arguments);
                     continue;
                 }
+            }
+
+            if (t.Factors.Length == 1 && t.Factors[0] is CallExpr { Function: "?:" })
+            {
+                throw new NotModelledException(
+                    $"the index `{Short(operation.Syntax)}` is chosen by a condition, which the checker accepts only inside a face value given to the two cells of the face with opposite weights",
+                    operation.Syntax,
+                    conditionalIndex: true);
             }
 
             throw new NotModelledException($"the index `{Short(operation.Syntax)}` depends on data, not only on the loop variables and index maps", operation.Syntax);
@@ -213,7 +239,7 @@ internal sealed class ExpressionReader
 
                 return (local.Local.Name, WithDefinitions(local.Local.Name, RoleOfType(local.Local.Type)));
             case IParameterReferenceOperation parameter:
-                return (parameter.Parameter.Name, WithDefinitions(parameter.Parameter.Name, Known.HasAttribute(parameter.Parameter, Known.FaceData) ? DataRole.Face : RoleOfType(parameter.Parameter.Type)));
+                return (parameter.Parameter.Name, WithDefinitions(parameter.Parameter.Name, Known.HasAttribute(parameter.Parameter, Known.FaceData) || _method.FaceParameters.Contains(parameter.Parameter) ? DataRole.Face : RoleOfType(parameter.Parameter.Type)));
             case IFieldReferenceOperation field:
             {
                 string name = Name(field);
@@ -232,6 +258,12 @@ internal sealed class ExpressionReader
 
                 string name = Name(property);
                 var role = Known.HasAttribute(property.Property, Known.FaceData) ? DataRole.Face : RoleOfType(property.Property.Type);
+                if (property.Property.Name == "Span" && property.Instance is { Type: INamedTypeSymbol { Name: "Memory" or "ReadOnlyMemory", ContainingNamespace.Name: "System" } })
+                {
+                    // memory.Span is the memory's own storage: face data when the memory is.
+                    role = ArrayRoot(property.Instance).Role;
+                }
+
                 if (property.Instance?.Type is { } owner && SymbolEqualityComparer.Default.Equals(owner, Known.UnstructuredMesh)
                     && property.Property.Name.StartsWith("Face", StringComparison.Ordinal)
                     && property.Property.Name is not ("FaceLeft" or "FaceRight" or "FaceNodes" or "FaceNodeOffsets"))
@@ -272,10 +304,33 @@ internal sealed class ExpressionReader
 
     private SumExpr ReadElement(IOperation operation)
     {
-        var target = ResolveElement(operation);
+        if (Gather is { Position: { } position, FacesRoot: { } facesRoot } gather && IsListElement(operation, position, facesRoot))
+        {
+            return gather.Face;
+        }
+
+        ElementTarget target;
+        try
+        {
+            target = ResolveElement(operation);
+        }
+        catch (NotModelledException e) when (e.ConditionalIndex)
+        {
+            return SumExpr.Factor(OpaqueElement(operation, e.Message), _method.Origins.Add(operation.Syntax));
+        }
+
         var read = target.ToRead();
         if (read.AllSubscripts.All(s => s is AffineSubscript a && a.Index.IsConstant))
         {
+            if (read.Subscripts.Length == 1 && read.Subscripts[0].Length == 1 && read.Path.Length == 0
+                && _method.ConstantTables.TryGetValue(read.Array, out var table)
+                && ((AffineSubscript)read.Subscripts[0][0]).Index.Constant is { IsConstant: true } k
+                && k.ConstantValue.IsInteger && k.ConstantValue.Numerator >= 0 && k.ConstantValue.Numerator < table.Length)
+            {
+                // An entry of a table of constants nothing changes is that constant.
+                return SumExpr.Invariant(SymPoly.Constant(table[(int)k.ConstantValue.Numerator]));
+            }
+
             // A fixed element (a ghost value, a coefficient table entry) is loop-invariant.
             return SumExpr.Invariant(SymPoly.Symbol(read.Render()));
         }
@@ -339,8 +394,132 @@ internal sealed class ExpressionReader
         _ => false,
     };
 
+    /// <summary>
+    /// An element read at a subscript chosen by a condition (<c>u[k &gt;= 0 ? k : left]</c>): the array,
+    /// the subscripts as values and the component, kept uninterpreted.
+    /// </summary>
+    private OpaqueReadExpr OpaqueElement(IOperation operation, string reason)
+    {
+        string path = string.Empty;
+        while (true)
+        {
+            switch (operation)
+            {
+                case IFieldReferenceOperation { Instance: { } instance } field when IsElementLike(instance):
+                    path = "." + field.Field.Name + path;
+                    operation = instance;
+                    continue;
+                case IPropertyReferenceOperation { Property.IsIndexer: false, Instance: { } instance } property when IsElementLike(instance):
+                    path = "." + property.Property.Name + path;
+                    operation = instance;
+                    continue;
+                case IConversionOperation { OperatorMethod: null } conversion:
+                    operation = conversion.Operand;
+                    continue;
+            }
+
+            break;
+        }
+
+        var groups = new List<ImmutableArray<SumExpr>>();
+        IOperation receiver;
+        switch (operation)
+        {
+            case IArrayElementReferenceOperation element:
+                var current = element;
+                while (true)
+                {
+                    groups.Insert(0, current.Indices.Select(i => Read(i).StripOrigins()).ToImmutableArray());
+                    if (current.ArrayReference is IArrayElementReferenceOperation inner)
+                    {
+                        current = inner;
+                        continue;
+                    }
+
+                    break;
+                }
+
+                receiver = current.ArrayReference;
+                break;
+            case IPropertyReferenceOperation { Property.IsIndexer: true, Instance: { } instance } indexer:
+                groups.Add(indexer.Arguments.Select(a => Read(a.Value).StripOrigins()).ToImmutableArray());
+                receiver = instance;
+                break;
+            default:
+                throw new NotModelledException(reason, operation.Syntax);
+        }
+
+        var (root, role) = ArrayRoot(receiver);
+        return new OpaqueReadExpr(root, groups.ToImmutableArray(), path, role, reason);
+    }
+
+    /// <summary><c>faces[n]</c>: the element of the face list at the position variable.</summary>
+    public bool IsListElement(IOperation operation, ISymbol position, string root)
+    {
+        var (receiver, indices) = operation switch
+        {
+            IArrayElementReferenceOperation e => (e.ArrayReference, e.Indices),
+            IPropertyReferenceOperation { Property.IsIndexer: true, Instance: { } instance } p => (instance, p.Arguments.Select(a => a.Value).ToImmutableArray()),
+            _ => (null, ImmutableArray<IOperation>.Empty),
+        };
+        if (receiver is null || indices.Length != 1)
+        {
+            return false;
+        }
+
+        var index = indices[0];
+        while (index is IConversionOperation c)
+        {
+            index = c.Operand;
+        }
+
+        return index is ILocalReferenceOperation local && SymbolEqualityComparer.Default.Equals(local.Local, position) && ArrayRoot(receiver).Root == root;
+    }
+
+    /// <summary>
+    /// <c>faceLeft[f] == c</c> (either order, or <c>!=</c>) while a gather is read for one side: a constant.
+    /// Null when the comparison is not of the cell with a compared map at the face.
+    /// </summary>
+    private bool? SideTest(IBinaryOperation binary)
+    {
+        if (Gather is not { } gather || binary.OperatorKind is not (BinaryOperatorKind.Equals or BinaryOperatorKind.NotEquals))
+        {
+            return null;
+        }
+
+        var cell = AffineIndex.Variable(gather.CellVariable).Key;
+        var face = AffineIndex.Variable(gather.FaceVariable).Key;
+        bool? Test(IOperation a, IOperation b)
+        {
+            var x = Read(a);
+            if (x.Terms.Length != 1 || !x.Terms[0].Coefficient.IsOne || x.Terms[0].Factors.Length != 1
+                || x.Terms[0].Factors[0] is not ReadExpr { IsLoopIndex: true } index || index.Subscripts[0][0].Key != cell)
+            {
+                return null;
+            }
+
+            var y = Read(b);
+            if (y.Terms.Length != 1 || !y.Terms[0].Coefficient.IsOne || y.Terms[0].Factors.Length != 1
+                || y.Terms[0].Factors[0] is not ReadExpr { IsLoopIndex: false, Path.Length: 0 } map
+                || map.Subscripts.Length != 1 || map.Subscripts[0].Length != 1 || map.Subscripts[0][0].Key != face)
+            {
+                return null;
+            }
+
+            return gather.IsOnSide(map.Array);
+        }
+
+        var onSide = Test(binary.LeftOperand, binary.RightOperand) ?? Test(binary.RightOperand, binary.LeftOperand);
+        return onSide is bool b ? b == (binary.OperatorKind == BinaryOperatorKind.Equals) : null;
+    }
+
     private SumExpr ReadBinary(IBinaryOperation binary)
     {
+        if (SideTest(binary) is bool side)
+        {
+            return Bool(side);
+        }
+
         if (binary.OperatorMethod is { } op)
         {
             return ReadUserOperator(binary, op);

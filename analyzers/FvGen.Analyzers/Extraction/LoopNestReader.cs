@@ -13,7 +13,7 @@ namespace FvGen.Analyzers.Extraction;
 /// <c>Parallel.For</c>/<c>ForEach</c> lambdas, nested up to three levels) into a
 /// <see cref="LoopUpdate"/>: the iteration space and the writes of its body in program order.
 /// </summary>
-internal sealed class LoopNestReader
+internal sealed partial class LoopNestReader
 {
     /// <summary>Three spatial levels plus one enclosing loop (a time or stage loop) are read; deeper is not modelled.</summary>
     public const int MaxDepth = 4;
@@ -54,9 +54,17 @@ internal sealed class LoopNestReader
 
         if (_depth > 1)
         {
-            // A local of the outer level accumulated by an inner loop (a cell summing its faces from a
-            // face list) is a reduction over that loop, not one value per iteration.
-            foreach (var carried in AssignedOuterLocals(loop))
+            var accumulated = AssignedOuterLocals(loop).ToList();
+            if (accumulated.Count > 0 && TryReadGather(loop, accumulated))
+            {
+                // A cell summing its faces from the cell-to-face list: read as the face loop it is.
+                _depth--;
+                return;
+            }
+
+            // Any other local of the outer level accumulated by an inner loop is a reduction over that
+            // loop, not one value per iteration.
+            foreach (var carried in accumulated)
             {
                 _reader.Bindings[carried] = new UnknownBinding($"the local `{carried.Name}` is accumulated over the inner loop (a reduction the checker does not model)");
             }
@@ -383,6 +391,9 @@ internal sealed class LoopNestReader
                 break;
             case IInvocationOperation invocation when invocation.TargetMethod.ContainingType?.ToDisplayString() == "System.Diagnostics.Debug":
                 return;
+            case IInvocationOperation invocation when invocation.Arguments.Any(a => a.Parameter?.RefKind == RefKind.Out):
+                ReadOutCall(invocation);
+                return;
         }
 
         throw new NotModelledException($"`{ExpressionReader.Short(operation.Syntax)}` has an effect the checker does not model", operation.Syntax);
@@ -457,6 +468,15 @@ internal sealed class LoopNestReader
     private void ReadIf(IConditionalOperation conditional)
     {
         var condition = _reader.Read(conditional.Condition);
+        if (_reader.Gather is not null)
+        {
+            // Reading one side of a gather: only the side of the face decides a branch.
+            bool taken = ExpressionReader.ConstantCondition(condition)
+                ?? throw new NotModelledException($"the term gathered from the face depends on `{ExpressionReader.Short(conditional.Condition.Syntax)}`, a condition other than the side of the face the cell is on", conditional.Condition.Syntax);
+            ReadStatement(taken ? conditional.WhenTrue : conditional.WhenFalse);
+            return;
+        }
+
         int writesBefore = _writes.Count;
         var before = new Dictionary<ISymbol, Binding>(_reader.Bindings, SymbolEqualityComparer.Default);
         ReadStatement(conditional.WhenTrue);

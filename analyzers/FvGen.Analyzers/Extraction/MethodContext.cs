@@ -27,7 +27,18 @@ internal sealed class MethodContext
     /// The context of a local function of this method: the same symbols, origins and issue list, but
     /// face arrays of its own (its loops fill and read its own buffers).
     /// </summary>
-    public MethodContext ForLocalFunction() => new(Known, Purity, ContainingType, Origins, Issues, _impureReported);
+    public MethodContext ForLocalFunction(IEnumerable<IParameterSymbol> faceParameters)
+    {
+        var context = new MethodContext(Known, Purity, ContainingType, Origins, Issues, _impureReported);
+        context.FaceParameters.UnionWith(faceParameters);
+        return context;
+    }
+
+    /// <summary>
+    /// Parameters of a local function that every call in the enclosing body passes face data
+    /// (a <c>[FaceData]</c> buffer handed down by the generator's face passes): face data inside it too.
+    /// </summary>
+    public HashSet<IParameterSymbol> FaceParameters { get; } = new(SymbolEqualityComparer.Default);
 
     public KnownSymbols Known { get; }
 
@@ -44,6 +55,9 @@ internal sealed class MethodContext
     public HashSet<string> InteriorFaceArrays { get; } = new(System.StringComparer.Ordinal);
 
     public List<ConservationIssue> Issues { get; }
+
+    /// <summary>Local arrays of constants nothing in the method changes (<see cref="ConstantTables"/>), by name.</summary>
+    public Dictionary<string, ImmutableArray<Conservation.Rational>> ConstantTables { get; } = new(System.StringComparer.Ordinal);
 
     private readonly HashSet<IMethodSymbol> _impureReported;
 
@@ -63,11 +77,13 @@ internal sealed class MethodContext
             ImmutableDictionary<string, string?>.Empty));
     }
 
-    public void ReportNotAnalyzed(string reason, SyntaxNode where) =>
+    public void ReportNotAnalyzed(string reason, SyntaxNode where) => ReportNotAnalyzed(reason, where.GetLocation());
+
+    public void ReportNotAnalyzed(string reason, Location where) =>
         Issues.Add(new ConservationIssue(
             DiagnosticIds.NotAnalyzed,
             ImmutableArray.Create(reason),
-            where.GetLocation(),
+            where,
             ImmutableArray<Location>.Empty,
             ImmutableDictionary<string, string?>.Empty));
 }

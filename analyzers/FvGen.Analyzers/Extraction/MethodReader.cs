@@ -28,7 +28,7 @@ internal static class MethodReader
                 if (localFunction.Body is { } localBody)
                 {
                     // Its own face arrays and bindings; the issues go to the same list.
-                    pending.Enqueue((localBody, method.ForLocalFunction()));
+                    pending.Enqueue((localBody, context.ForLocalFunction(FaceParametersOf(localFunction.Symbol, next, context))));
                 }
             }
         }
@@ -36,10 +36,53 @@ internal static class MethodReader
         return method.Issues;
     }
 
+    /// <summary>The parameters of a local function to which every call in <paramref name="body"/> passes face data.</summary>
+    private static IEnumerable<IParameterSymbol> FaceParametersOf(IMethodSymbol localFunction, IOperation body, MethodContext context)
+    {
+        var calls = body.Descendants().OfType<IInvocationOperation>()
+            .Where(i => SymbolEqualityComparer.Default.Equals(i.TargetMethod.OriginalDefinition, localFunction.OriginalDefinition))
+            .ToList();
+        if (calls.Count == 0)
+        {
+            yield break;
+        }
+
+        var reader = new ExpressionReader(context, new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default));
+        foreach (var parameter in localFunction.Parameters)
+        {
+            bool face = calls.All(call =>
+            {
+                var argument = call.Arguments.FirstOrDefault(a => SymbolEqualityComparer.Default.Equals(a.Parameter, parameter));
+                if (argument is null)
+                {
+                    return false;
+                }
+
+                try
+                {
+                    return reader.ArrayRoot(argument.Value).Role != DataRole.Cell;
+                }
+                catch (NotModelledException)
+                {
+                    return false;
+                }
+            });
+            if (face)
+            {
+                yield return parameter;
+            }
+        }
+    }
+
     private static void AnalyzeBody(IOperation body, MethodContext method, List<ILocalFunctionOperation> localFunctions)
     {
         var nests = new List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)>();
         var outer = new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default);
+        foreach (var (name, values) in ConstantTables.Find(body))
+        {
+            method.ConstantTables[name] = values;
+        }
+
         Walk(body, outer, nests, method, localFunctions);
 
         MarkDefinitions(nests, method);
@@ -66,7 +109,7 @@ internal static class MethodReader
             }
             catch (ModelLimitException e)
             {
-                method.ReportNotAnalyzed(e.Message, loop.Syntax);
+                method.ReportNotAnalyzed(e.Message, method.Origins[e.Origin] ?? loop.Syntax.GetLocation());
             }
         }
     }

@@ -9,11 +9,15 @@ namespace FvGen.Analyzers.Extraction;
 /// </summary>
 internal sealed class NotModelledException : Exception
 {
-    public NotModelledException(string reason, SyntaxNode? where)
+    public NotModelledException(string reason, SyntaxNode? where, bool conditionalIndex = false)
         : base(reason)
     {
         Where = where;
+        ConditionalIndex = conditionalIndex;
     }
 
     public SyntaxNode? Where { get; }
+
+    /// <summary>Raised for a subscript chosen by a condition: a read there may still feed a balanced face value.</summary>
+    public bool ConditionalIndex { get; }
 }

@@ -23,6 +23,50 @@ public sealed class NotAnalyzedTests
             VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("an array element is written under a condition"));
 
     [Fact]
+    public Task GatherWithASignArrayIsNotGuessed() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Gather
+            {
+                [ConservativeUpdate]
+                public static void Rate(int[] cellFaceStart, int[] cellFaces, double[] sign, [FaceData] double[] flux, double[] res)
+                {
+                    for (int c = 0; c < res.Length; c++)
+                    {
+                        double sum = 0;
+                        for (int n = cellFaceStart[c]; n < cellFaceStart[c + 1]; n++)
+                            sum += {|#0:sign[n]|} * flux[cellFaces[n]];
+                        res[c] = sum;
+                    }
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0)
+                .WithArguments("the position `n` in the face list is read as `sign[n]`, not only to take the face from the list; the side of a face is read only from a comparison of the cell with a face-to-cell map"));
+
+    [Fact]
+    public Task ConditionalSubscriptInACellLoopIsReportedWhereItIsRead() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Kernel
+            {
+                static double G(double a, double b) => a;
+
+                [ConservativeUpdate]
+                public static void Rate(double[] u, double[] r)
+                {
+                    for (int i = 2; i < r.Length - 1; i++)
+                    {
+                        int far = i >= 3 ? i - 2 : i - 1;
+                        r[i] = -(G(u[i], u[i + 1]) - {|#0:G(u[far], u[i])|});
+                    }
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0)
+                .WithArguments("the index `far` is chosen by a condition, which the checker accepts only inside a face value given to the two cells of the face with opposite weights"));
+
+    [Fact]
     public Task DataDependentIndexIsNamed() =>
         VerifyCS.VerifyAnalyzerAsync(
             """
