@@ -12,12 +12,42 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class AffineIndex : IEquatable<AffineIndex>
 {
+    private string? _key;
+
     public AffineIndex(SymPoly constant, IEnumerable<KeyValuePair<string, SymPoly>> linear)
+        : this(constant, Canonical(linear), null)
+    {
+    }
+
+    /// <summary>From a linear part already in canonical form (and its key when known): a shift moves only the constant.</summary>
+    private AffineIndex(SymPoly constant, ImmutableArray<KeyValuePair<string, SymPoly>> linear, string? linearKey)
     {
         Constant = constant;
-        Linear = linear.Where(l => !l.Value.IsZero).OrderBy(l => l.Key, StringComparer.Ordinal).ToImmutableArray();
-        LinearKey = string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
-        Key = LinearKey + "|" + Constant;
+        Linear = linear;
+        LinearKey = linearKey ?? string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
+    }
+
+    /// <summary>The non-zero coefficients ordered by variable name (a stable insertion sort: there are one to three).</summary>
+    private static ImmutableArray<KeyValuePair<string, SymPoly>> Canonical(IEnumerable<KeyValuePair<string, SymPoly>> linear)
+    {
+        var kept = new List<KeyValuePair<string, SymPoly>>();
+        foreach (var l in linear)
+        {
+            if (l.Value.IsZero)
+            {
+                continue;
+            }
+
+            int at = kept.Count;
+            while (at > 0 && string.CompareOrdinal(kept[at - 1].Key, l.Key) > 0)
+            {
+                at--;
+            }
+
+            kept.Insert(at, l);
+        }
+
+        return kept.ToImmutableArray();
     }
 
     /// <summary>The part that does not depend on a loop variable.</summary>
@@ -29,7 +59,7 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     /// <summary>Identifies the linear part only (the "shape" of the index).</summary>
     public string LinearKey { get; }
 
-    public string Key { get; }
+    public string Key => _key ??= LinearKey + "|" + Constant;
 
     public bool IsConstant => Linear.IsEmpty;
 
@@ -67,15 +97,17 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     public AffineIndex Shift(IReadOnlyDictionary<string, long> shift)
     {
         var constant = Constant;
+        bool moved = false;
         foreach (var l in Linear)
         {
             if (shift.TryGetValue(l.Key, out long n) && n != 0)
             {
                 constant += l.Value * Rational.FromInteger(n);
+                moved = true;
             }
         }
 
-        return new AffineIndex(constant, Linear);
+        return moved ? new AffineIndex(constant, Linear, LinearKey) : this;
     }
 
     private static IEnumerable<KeyValuePair<string, SymPoly>> Merge(IEnumerable<KeyValuePair<string, SymPoly>> parts)
