@@ -66,7 +66,7 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     public static AffineIndex FromConstant(SymPoly constant) => new(constant, Array.Empty<KeyValuePair<string, SymPoly>>());
 
     public static AffineIndex Variable(string name) =>
-        new(SymPoly.Zero, new[] { new KeyValuePair<string, SymPoly>(name, SymPoly.One) });
+        new(SymPoly.Zero, ImmutableArray.Create(new KeyValuePair<string, SymPoly>(name, SymPoly.One)), null);
 
     public SymPoly CoefficientOf(string variable)
     {
@@ -84,14 +84,17 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     public static AffineIndex operator +(AffineIndex a, AffineIndex b) =>
         new(a.Constant + b.Constant, Merge(a.Linear.Concat(b.Linear)));
 
+    // Negating or scaling by a non-zero factor keeps every coefficient non-zero and the order: still canonical.
     public static AffineIndex operator -(AffineIndex a) =>
-        new(-a.Constant, a.Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, -l.Value)));
+        new(-a.Constant, a.Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, -l.Value)).ToImmutableArray(), null);
 
     public static AffineIndex operator -(AffineIndex a, AffineIndex b) => a + (-b);
 
     /// <summary>Product with a loop-invariant factor.</summary>
     public AffineIndex Scale(SymPoly factor) =>
-        new(Constant * factor, Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, l.Value * factor)));
+        factor.IsZero
+            ? new(Constant * factor, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, null)
+            : new(Constant * factor, Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, l.Value * factor)).ToImmutableArray(), null);
 
     /// <summary>The index after the loop variables move by <paramref name="shift"/> (iteration <c>i → i + n</c>).</summary>
     public AffineIndex Shift(IReadOnlyDictionary<string, long> shift)
