@@ -12,12 +12,42 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class AffineIndex : IEquatable<AffineIndex>
 {
+    private string? _key;
+
     public AffineIndex(SymPoly constant, IEnumerable<KeyValuePair<string, SymPoly>> linear)
+        : this(constant, Canonical(linear), null)
+    {
+    }
+
+    /// <summary>From a linear part already in canonical form (and its key when known): a shift moves only the constant.</summary>
+    private AffineIndex(SymPoly constant, ImmutableArray<KeyValuePair<string, SymPoly>> linear, string? linearKey)
     {
         Constant = constant;
-        Linear = linear.Where(l => !l.Value.IsZero).OrderBy(l => l.Key, StringComparer.Ordinal).ToImmutableArray();
-        LinearKey = string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
-        Key = LinearKey + "|" + Constant;
+        Linear = linear;
+        LinearKey = linearKey ?? string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
+    }
+
+    /// <summary>The non-zero coefficients ordered by variable name (a stable insertion sort: there are one to three).</summary>
+    private static ImmutableArray<KeyValuePair<string, SymPoly>> Canonical(IEnumerable<KeyValuePair<string, SymPoly>> linear)
+    {
+        var kept = new List<KeyValuePair<string, SymPoly>>();
+        foreach (var l in linear)
+        {
+            if (l.Value.IsZero)
+            {
+                continue;
+            }
+
+            int at = kept.Count;
+            while (at > 0 && string.CompareOrdinal(kept[at - 1].Key, l.Key) > 0)
+            {
+                at--;
+            }
+
+            kept.Insert(at, l);
+        }
+
+        return kept.ToImmutableArray();
     }
 
     /// <summary>The part that does not depend on a loop variable.</summary>
@@ -29,14 +59,14 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     /// <summary>Identifies the linear part only (the "shape" of the index).</summary>
     public string LinearKey { get; }
 
-    public string Key { get; }
+    public string Key => _key ??= LinearKey + "|" + Constant;
 
     public bool IsConstant => Linear.IsEmpty;
 
     public static AffineIndex FromConstant(SymPoly constant) => new(constant, Array.Empty<KeyValuePair<string, SymPoly>>());
 
     public static AffineIndex Variable(string name) =>
-        new(SymPoly.Zero, new[] { new KeyValuePair<string, SymPoly>(name, SymPoly.One) });
+        new(SymPoly.Zero, ImmutableArray.Create(new KeyValuePair<string, SymPoly>(name, SymPoly.One)), null);
 
     public SymPoly CoefficientOf(string variable)
     {
@@ -54,28 +84,33 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     public static AffineIndex operator +(AffineIndex a, AffineIndex b) =>
         new(a.Constant + b.Constant, Merge(a.Linear.Concat(b.Linear)));
 
+    // Negating or scaling by a non-zero factor keeps every coefficient non-zero and the order: still canonical.
     public static AffineIndex operator -(AffineIndex a) =>
-        new(-a.Constant, a.Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, -l.Value)));
+        new(-a.Constant, a.Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, -l.Value)).ToImmutableArray(), null);
 
     public static AffineIndex operator -(AffineIndex a, AffineIndex b) => a + (-b);
 
     /// <summary>Product with a loop-invariant factor.</summary>
     public AffineIndex Scale(SymPoly factor) =>
-        new(Constant * factor, Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, l.Value * factor)));
+        factor.IsZero
+            ? new(Constant * factor, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, null)
+            : new(Constant * factor, Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, l.Value * factor)).ToImmutableArray(), null);
 
     /// <summary>The index after the loop variables move by <paramref name="shift"/> (iteration <c>i → i + n</c>).</summary>
     public AffineIndex Shift(IReadOnlyDictionary<string, long> shift)
     {
         var constant = Constant;
+        bool moved = false;
         foreach (var l in Linear)
         {
             if (shift.TryGetValue(l.Key, out long n) && n != 0)
             {
                 constant += l.Value * Rational.FromInteger(n);
+                moved = true;
             }
         }
 
-        return new AffineIndex(constant, Linear);
+        return moved ? new AffineIndex(constant, Linear, LinearKey) : this;
     }
 
     private static IEnumerable<KeyValuePair<string, SymPoly>> Merge(IEnumerable<KeyValuePair<string, SymPoly>> parts)

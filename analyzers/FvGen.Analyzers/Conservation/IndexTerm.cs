@@ -55,8 +55,9 @@ internal sealed class MappedSubscript : IndexTerm
         Map = map;
         Arguments = arguments;
         Key = map + "[" + string.Join(",", arguments.Select(a => a.Key)) + "]";
-        ShapeKey = map + "[" + string.Join(",", arguments.Select(a => a.LinearKey)) + "]";
     }
+
+    private string? _shapeKey;
 
     public string Map { get; }
 
@@ -64,7 +65,7 @@ internal sealed class MappedSubscript : IndexTerm
 
     public override string Key { get; }
 
-    public override string ShapeKey { get; }
+    public override string ShapeKey => _shapeKey ??= Map + "[" + string.Join(",", Arguments.Select(a => a.LinearKey)) + "]";
 
     public override IEnumerable<AffineIndex> AffineParts => Arguments;
 

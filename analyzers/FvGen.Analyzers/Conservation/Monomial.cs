@@ -78,8 +78,12 @@ internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
 
     public int CompareTo(Monomial? other) => string.CompareOrdinal(Key, other?.Key);
 
+    private string? _text;
+
     /// <summary>Readable text such as <c>dt/dx²</c>; <c>1</c> for the empty product.</summary>
-    public override string ToString()
+    public override string ToString() => _text ??= Format();
+
+    private string Format()
     {
         var up = Powers.Where(p => p.Value > 0).ToList();
         var down = Powers.Where(p => p.Value < 0).ToList();

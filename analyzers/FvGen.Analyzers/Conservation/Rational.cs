@@ -24,11 +24,15 @@ internal readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
     /// <summary>The denominator; always positive (a default instance reads as zero).</summary>
     public BigInteger Denominator => _denominator.IsZero ? BigInteger.One : _denominator;
 
-    public static Rational Zero => Create(0, 1);
+    private static readonly Rational ZeroValue = new(BigInteger.Zero, BigInteger.One);
+    private static readonly Rational OneValue = new(BigInteger.One, BigInteger.One);
+    private static readonly Rational MinusOneValue = new(BigInteger.MinusOne, BigInteger.One);
 
-    public static Rational One => Create(1, 1);
+    public static Rational Zero => ZeroValue;
 
-    public static Rational MinusOne => Create(-1, 1);
+    public static Rational One => OneValue;
+
+    public static Rational MinusOne => MinusOneValue;
 
     public bool IsZero => Numerator.IsZero;
 
@@ -43,6 +47,12 @@ internal readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
         if (denominator.IsZero)
         {
             throw new DivideByZeroException("A rational coefficient cannot have a zero denominator.");
+        }
+
+        if (denominator.IsOne)
+        {
+            // An integer: already in lowest terms.
+            return new Rational(numerator, denominator);
         }
 
         if (denominator.Sign < 0)

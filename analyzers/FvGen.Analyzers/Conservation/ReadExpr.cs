@@ -17,8 +17,9 @@ internal sealed class ReadExpr : Expr
         Path = path;
         Role = role;
         Key = "R:" + array + string.Concat(subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.Key)) + "]")) + path;
-        ShapeKey = "R:" + array + string.Concat(subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.ShapeKey)) + "]")) + path;
     }
+
+    private string? _shapeKey;
 
     /// <summary>Canonical name of the array (a parameter, local, field or member chain).</summary>
     public string Array { get; }
@@ -33,7 +34,9 @@ internal sealed class ReadExpr : Expr
 
     public override string Key { get; }
 
-    public override string ShapeKey { get; }
+    /// <summary>Built on first use: shifted copies made only to compare keys never need it.</summary>
+    public override string ShapeKey =>
+        _shapeKey ??= "R:" + Array + string.Concat(Subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.ShapeKey)) + "]")) + Path;
 
     public IEnumerable<IndexTerm> AllSubscripts => Subscripts.SelectMany(g => g);
 

@@ -46,8 +46,13 @@ internal sealed class SumExpr
 
     public static SumExpr Of(IEnumerable<Term> terms)
     {
+        if (terms is Term[] { Length: 1 } single)
+        {
+            // One term: nothing to merge or order.
+            return single[0].Coefficient.IsZero ? new SumExpr(ImmutableArray<Term>.Empty) : new SumExpr(ImmutableArray.Create(single[0]));
+        }
+
         var byBody = new Dictionary<string, (SymPoly Coefficient, Term First, List<int>? Origins)>(StringComparer.Ordinal);
-        var order = new List<string>();
         foreach (var t in terms)
         {
             if (byBody.TryGetValue(t.BodyKey, out var current))
@@ -59,7 +64,6 @@ internal sealed class SumExpr
             else
             {
                 byBody[t.BodyKey] = (t.Coefficient, t, null);
-                order.Add(t.BodyKey);
             }
         }
 
@@ -68,16 +72,81 @@ internal sealed class SumExpr
             throw new ModelLimitException($"the expansion has more than {MaxTerms} terms");
         }
 
-        var result = order
-            .OrderBy(k => k, StringComparer.Ordinal)
-            .Select(k => byBody[k])
-            .Where(e => !e.Coefficient.IsZero)
-            .Select(e => e.Origins is null ? e.First : new Term(e.Coefficient, e.First.Factors, e.Origins.Distinct().ToImmutableArray()))
-            .ToImmutableArray();
-        return new SumExpr(result);
+        var keys = new string[byBody.Count];
+        byBody.Keys.CopyTo(keys, 0);
+        Array.Sort(keys, StringComparer.Ordinal);
+        var result = ImmutableArray.CreateBuilder<Term>(keys.Length);
+        foreach (var k in keys)
+        {
+            var e = byBody[k];
+            if (!e.Coefficient.IsZero)
+            {
+                result.Add(e.Origins is null ? e.First : Merged(e.Coefficient, e.First, e.Origins));
+            }
+        }
+
+        return new SumExpr(result.ToImmutable());
     }
 
-    public static SumExpr operator +(SumExpr a, SumExpr b) => a.IsZero ? b : b.IsZero ? a : Of(a.Terms.Concat(b.Terms));
+    /// <summary>Terms of equal body combined: the first term's factors, the summed coefficient, every origin once in order of appearance.</summary>
+    private static Term Merged(SymPoly coefficient, Term first, List<int> origins) =>
+        new(coefficient, first.Factors, origins.Distinct().ToImmutableArray());
+
+    public static SumExpr operator +(SumExpr a, SumExpr b) => a.IsZero ? b : b.IsZero ? a : Merge(a.Terms, b.Terms);
+
+    /// <summary>
+    /// The sum of two canonical sums (bodies in ordinal order, distinct, none zero) by one ordered
+    /// merge: the same terms as <see cref="Of"/> on their concatenation, without hashing and sorting.
+    /// </summary>
+    private static SumExpr Merge(ImmutableArray<Term> a, ImmutableArray<Term> b)
+    {
+        var result = ImmutableArray.CreateBuilder<Term>(a.Length + b.Length);
+        int i = 0, j = 0, distinct = 0;
+        while (i < a.Length && j < b.Length)
+        {
+            distinct++;
+            int order = string.CompareOrdinal(a[i].BodyKey, b[j].BodyKey);
+            if (order < 0)
+            {
+                result.Add(a[i++]);
+            }
+            else if (order > 0)
+            {
+                result.Add(b[j++]);
+            }
+            else
+            {
+                var coefficient = a[i].Coefficient + b[j].Coefficient;
+                if (!coefficient.IsZero)
+                {
+                    var origins = new List<int>(a[i].Origins);
+                    origins.AddRange(b[j].Origins);
+                    result.Add(Merged(coefficient, a[i], origins));
+                }
+
+                i++;
+                j++;
+            }
+        }
+
+        distinct += (a.Length - i) + (b.Length - j);
+        if (distinct > MaxTerms)
+        {
+            throw new ModelLimitException($"the expansion has more than {MaxTerms} terms");
+        }
+
+        while (i < a.Length)
+        {
+            result.Add(a[i++]);
+        }
+
+        while (j < b.Length)
+        {
+            result.Add(b[j++]);
+        }
+
+        return new SumExpr(result.ToImmutable());
+    }
 
     public static SumExpr operator -(SumExpr a) => a.Scale(-SymPoly.One);
 

@@ -13,13 +13,13 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class SymPoly : IEquatable<SymPoly>
 {
-    private readonly string _key;
+    // Both texts are built on first use: most intermediate coefficients are never compared or printed.
+    private string? _key;
+    private string? _text;
 
-    private SymPoly(ImmutableArray<KeyValuePair<Monomial, Rational>> terms)
-    {
-        Terms = terms;
-        _key = string.Join(" + ", terms.Select(t => t.Value + "*" + t.Key.Key));
-    }
+    private SymPoly(ImmutableArray<KeyValuePair<Monomial, Rational>> terms) => Terms = terms;
+
+    private string Key => _key ??= string.Join(" + ", Terms.Select(t => t.Value + "*" + t.Key.Key));
 
     public static SymPoly Zero { get; } = new(ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty);
 
@@ -48,6 +48,12 @@ internal sealed class SymPoly : IEquatable<SymPoly>
 
     public static SymPoly Of(IEnumerable<KeyValuePair<Monomial, Rational>> terms)
     {
+        if (terms is KeyValuePair<Monomial, Rational>[] { Length: 1 } single)
+        {
+            // One term (a constant or a symbol): nothing to merge or order.
+            return new SymPoly(single[0].Value.IsZero ? ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty : ImmutableArray.Create(single[0]));
+        }
+
         var sum = new SortedDictionary<Monomial, Rational>();
         foreach (var t in terms)
         {
@@ -57,7 +63,52 @@ internal sealed class SymPoly : IEquatable<SymPoly>
         return new SymPoly(sum.Where(t => !t.Value.IsZero).ToImmutableArray());
     }
 
-    public static SymPoly operator +(SymPoly a, SymPoly b) => a.IsZero ? b : b.IsZero ? a : Of(a.Terms.Concat(b.Terms));
+    public static SymPoly operator +(SymPoly a, SymPoly b) => a.IsZero ? b : b.IsZero ? a : Merge(a.Terms, b.Terms);
+
+    /// <summary>
+    /// The sum of two canonical term lists (monomial order, none zero) by one ordered merge: the same
+    /// result as <see cref="Of"/> on their concatenation, without re-sorting.
+    /// </summary>
+    private static SymPoly Merge(ImmutableArray<KeyValuePair<Monomial, Rational>> a, ImmutableArray<KeyValuePair<Monomial, Rational>> b)
+    {
+        var result = ImmutableArray.CreateBuilder<KeyValuePair<Monomial, Rational>>(a.Length + b.Length);
+        int i = 0, j = 0;
+        while (i < a.Length && j < b.Length)
+        {
+            int order = a[i].Key.CompareTo(b[j].Key);
+            if (order < 0)
+            {
+                result.Add(a[i++]);
+            }
+            else if (order > 0)
+            {
+                result.Add(b[j++]);
+            }
+            else
+            {
+                var value = a[i].Value + b[j].Value;
+                if (!value.IsZero)
+                {
+                    result.Add(new KeyValuePair<Monomial, Rational>(a[i].Key, value));
+                }
+
+                i++;
+                j++;
+            }
+        }
+
+        while (i < a.Length)
+        {
+            result.Add(a[i++]);
+        }
+
+        while (j < b.Length)
+        {
+            result.Add(b[j++]);
+        }
+
+        return new SymPoly(result.ToImmutable());
+    }
 
     public static SymPoly operator -(SymPoly a) =>
         new(a.Terms.Select(t => new KeyValuePair<Monomial, Rational>(t.Key, -t.Value)).ToImmutableArray());
@@ -81,6 +132,11 @@ internal sealed class SymPoly : IEquatable<SymPoly>
             return a;
         }
 
+        if (a.IsMonomial && b.IsMonomial)
+        {
+            return Of(new[] { new KeyValuePair<Monomial, Rational>(a.Terms[0].Key * b.Terms[0].Key, a.Terms[0].Value * b.Terms[0].Value) });
+        }
+
         return Of(a.Terms.SelectMany(x => b.Terms.Select(y => new KeyValuePair<Monomial, Rational>(x.Key * y.Key, x.Value * y.Value))));
     }
 
@@ -102,14 +158,16 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     /// <summary>Sign of the leading term (used to pull a sign out of a canonical sum).</summary>
     public int LeadingSign => Terms.IsEmpty ? 0 : Terms[0].Value.Sign;
 
-    public bool Equals(SymPoly? other) => other is not null && _key == other._key;
+    public bool Equals(SymPoly? other) => other is not null && (ReferenceEquals(this, other) || Key == other.Key);
 
     public override bool Equals(object? obj) => obj is SymPoly p && Equals(p);
 
-    public override int GetHashCode() => StringComparer.Ordinal.GetHashCode(_key);
+    public override int GetHashCode() => StringComparer.Ordinal.GetHashCode(Key);
 
     /// <summary>Readable text: <c>-1/dx</c>, <c>dt/dx - dt/dy</c>, <c>0</c>.</summary>
-    public override string ToString()
+    public override string ToString() => _text ??= Format();
+
+    private string Format()
     {
         if (IsZero)
         {

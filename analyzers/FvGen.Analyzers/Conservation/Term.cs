@@ -21,6 +21,16 @@ internal sealed class Term
         BodyKey = Factors.Length == 1 ? Factors[0].Key : string.Join("*", Factors.Select(f => f.Key));
     }
 
+    /// <summary>The same body with another coefficient: factors and keys carry over as they are.</summary>
+    private Term(SymPoly coefficient, Term body)
+    {
+        Coefficient = coefficient;
+        Factors = body.Factors;
+        Origins = body.Origins;
+        BodyKey = body.BodyKey;
+        _bodyShapeKey = body._bodyShapeKey;
+    }
+
     private string? _bodyShapeKey;
 
     private static bool IsSorted(IReadOnlyList<Expr> factors)
@@ -49,9 +59,12 @@ internal sealed class Term
 
     public bool IsInvariant => Factors.IsEmpty;
 
-    public IEnumerable<ReadExpr> Reads => Factors.SelectMany(f => f.Reads);
+    /// <summary>Every array read of the body, in factor order (collected once: the matcher and the balance ask often).</summary>
+    public IEnumerable<ReadExpr> Reads => _reads ??= Factors.SelectMany(f => f.Reads).ToArray();
 
-    public Term WithCoefficient(SymPoly coefficient) => new(coefficient, Factors, Origins);
+    private ReadExpr[]? _reads;
+
+    public Term WithCoefficient(SymPoly coefficient) => new(coefficient, this);
 
     /// <summary>
     /// The term at iteration <c>i + n</c>. A reciprocal is normalised again (its leading coefficient

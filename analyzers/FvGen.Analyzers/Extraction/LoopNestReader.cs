@@ -524,11 +524,10 @@ internal sealed partial class LoopNestReader
     }
 
     /// <summary>Locals declared outside the nest and assigned inside it.</summary>
+    /// <remarks>One walk of the nest; the loop headers are collected only when an outer local is assigned at all.</remarks>
     private IEnumerable<ILocalSymbol> AssignedOuterLocals(IOperation loop)
     {
-        var declaredInside = new HashSet<ILocalSymbol>(
-            loop.Descendants().OfType<IVariableDeclaratorOperation>().Select(d => d.Symbol),
-            SymbolEqualityComparer.Default);
+        var declaredInside = new HashSet<ILocalSymbol>(SymbolEqualityComparer.Default);
         if (loop is IForLoopOperation f)
         {
             foreach (var l in f.Locals)
@@ -537,22 +536,42 @@ internal sealed partial class LoopNestReader
             }
         }
 
-        var headers = new HashSet<IOperation>(
-            loop.DescendantsAndSelf().OfType<IForLoopOperation>()
-                .SelectMany(f => f.Before.Concat(f.AtLoopBottom))
-                .SelectMany(h => h.DescendantsAndSelf()));
-        var result = new HashSet<ILocalSymbol>(SymbolEqualityComparer.Default);
+        var assigned = new List<(IOperation Operation, ILocalSymbol Local)>();
         foreach (var op in loop.Descendants())
         {
+            if (op is IVariableDeclaratorOperation declarator)
+            {
+                declaredInside.Add(declarator.Symbol);
+            }
+
             var target = op switch
             {
                 IAssignmentOperation a => a.Target,
                 IIncrementOrDecrementOperation i => i.Target,
                 _ => null,
             };
-            if (target is ILocalReferenceOperation local && !declaredInside.Contains(local.Local) && !headers.Contains(op))
+            if (target is ILocalReferenceOperation local)
             {
-                result.Add(local.Local);
+                assigned.Add((op, local.Local));
+            }
+        }
+
+        var result = new HashSet<ILocalSymbol>(SymbolEqualityComparer.Default);
+        HashSet<IOperation>? headers = null;
+        foreach (var (op, local) in assigned)
+        {
+            if (declaredInside.Contains(local))
+            {
+                continue;
+            }
+
+            headers ??= new HashSet<IOperation>(
+                loop.DescendantsAndSelf().OfType<IForLoopOperation>()
+                    .SelectMany(h => h.Before.Concat(h.AtLoopBottom))
+                    .SelectMany(h => h.DescendantsAndSelf()));
+            if (!headers.Contains(op))
+            {
+                result.Add(local);
             }
         }
 

@@ -85,10 +85,13 @@ internal static class MethodReader
 
         Walk(body, outer, nests, method, localFunctions);
 
-        MarkDefinitions(nests, method);
-        foreach (var (loop, bindings) in nests)
+        // What each nest writes and reads is needed twice (to mark definitions, then to skip them): read once.
+        var accesses = nests.Select(n => Accesses(n.Loop, n.Outer, method)).ToList();
+        MarkDefinitions(nests, accesses, method);
+        for (int k = 0; k < nests.Count; k++)
         {
-            if (IsDefinition(loop, bindings, method) || !WritesElements(loop))
+            var (loop, bindings) = nests[k];
+            if (IsDefinition(accesses[k], method) || !WritesElements(loop))
             {
                 // A definition fills face data; a loop writing no array element (a reduction such as
                 // the largest wave speed) updates nothing that could be conservative or not.
@@ -287,9 +290,8 @@ internal static class MethodReader
     /// at the cell it writes (a residual used by an update) stays cell data, and the loop that fills
     /// it is checked as an update.
     /// </summary>
-    private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, MethodContext method)
+    private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, List<(HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned)> accesses, MethodContext method)
     {
-        var accesses = nests.Select(n => Accesses(n.Loop, n.Outer, method)).ToList();
 
         // From the last loop back: arrays read by a later definition (face states feeding a flux pass)
         // are intermediate face data too, whatever subscript that definition reads them at.
@@ -321,9 +323,9 @@ internal static class MethodReader
         }
     }
 
-    private static bool IsDefinition(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
+    private static bool IsDefinition((HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned) access, MethodContext method)
     {
-        var (written, _, _, onlyAssigned) = Accesses(loop, outer, method);
+        var (written, _, _, onlyAssigned) = access;
         return written.Count > 0 && onlyAssigned && written.All(method.FaceArrays.Contains);
     }
 

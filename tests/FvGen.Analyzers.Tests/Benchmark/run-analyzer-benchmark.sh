@@ -1,12 +1,15 @@
 #!/usr/bin/env bash
-# Builds a generated project of N kernels (copies of the corpus, each in its own namespace) twice —
-# without and with the FvGen analyzers — and prints the compiler's own analyzer timing
-# (-p:ReportAnalyzer=true) next to the build times. Not part of the test run: speed is never asserted.
-# Usage: tests/FvGen.Analyzers.Tests/Benchmark/run-analyzer-benchmark.sh [N] [work-dir]
+# Builds a generated project of N kernels (copies of the corpus, each in its own namespace, every one
+# in scope) R times without and R times with the FvGen analyzers, alternating, and prints each build's
+# wall time, the compiler's own analyzer timing (-p:ReportAnalyzer=true) and the medians with ratios.
+# The analyzers are referenced as a built DLL, the way the package delivers them, so the build with
+# them does not also pay for building the analyzer project. Not part of the test run: speed is never
+# asserted. Usage: tests/FvGen.Analyzers.Tests/Benchmark/run-analyzer-benchmark.sh [N] [R] [work-dir]
 set -euo pipefail
 N="${1:-500}"
+R="${2:-3}"
 REPO="$(cd "$(dirname "$0")/../../.." && pwd)"
-WORK="${2:-$(mktemp -d)}"
+WORK="${3:-$(mktemp -d)}"
 CORPUS="$REPO/tests/FvGen.Analyzers.Tests/Corpus"
 mkdir -p "$WORK/Kernels"
 mapfile -t FILES < <(ls "$CORPUS"/*.cs | sort)
@@ -18,6 +21,8 @@ for ((k = 0; k < N; k++)); do
     { if (!done && last && NR > last) { print "namespace " ns ";"; done = 1 } print }
   ' "$src" > "$WORK/Kernels/K$k.cs"
 done
+dotnet build "$REPO/analyzers/FvGen.Analyzers/FvGen.Analyzers.csproj" -c Release > /dev/null
+ANALYZER="$REPO/analyzers/FvGen.Analyzers/bin/Release/netstandard2.0/FvGen.Analyzers.dll"
 cat > "$WORK/Bench.csproj" <<XML
 <Project Sdk="Microsoft.NET.Sdk">
   <PropertyGroup>
@@ -31,26 +36,43 @@ cat > "$WORK/Bench.csproj" <<XML
   </PropertyGroup>
   <ItemGroup>
     <ProjectReference Include="$REPO/runtime/FvGen.Runtime/FvGen.Runtime.csproj" />
-    <ProjectReference Include="$REPO/analyzers/FvGen.Analyzers/FvGen.Analyzers.csproj" OutputItemType="Analyzer" ReferenceOutputAssembly="false" Condition="'\$(WithFvGenAnalyzers)' == 'true'" />
+    <Analyzer Include="$ANALYZER" Condition="'\$(WithFvGenAnalyzers)' == 'true'" />
   </ItemGroup>
 </Project>
 XML
 cd "$WORK"
-dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=true > /dev/null   # warm: restore and build references
+# Warm-up: restore and build the runtime reference once.
+dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=true > /dev/null
 dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=false > /dev/null
-for mode in false true; do
-  # References are up to date: touching the kernels makes the compiler run on the benchmark project only.
-  touch Kernels/*.cs
-  start=$(date +%s.%N)
-  dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=$mode -p:ReportAnalyzer=true -v:d > "build-$mode.log"
-  end=$(date +%s.%N)
-  echo "analyzers=$mode: build $(echo "$end - $start" | bc) s"
+median() { sort -g | awk '{ v[NR] = $1 } END { print (NR % 2) ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2 }'; }
+: > times-false.txt
+: > times-true.txt
+: > fvgen.txt
+for ((r = 1; r <= R; r++)); do
+  for mode in false true; do
+    # References are up to date: touching the kernels makes the compiler run on the benchmark project only.
+    touch Kernels/*.cs
+    start=$(date +%s.%N)
+    dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=$mode -p:ReportAnalyzer=true -v:d > "build-$mode.log"
+    end=$(date +%s.%N)
+    seconds=$(echo "$end - $start" | bc)
+    echo "$seconds" >> "times-$mode.txt"
+    # The analyzer report of the benchmark project's compiler call (the last one in the log).
+    fvgen=$( (grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+FvGen\.Analyzers, Version" "build-$mode.log" || true) | tail -1 | awk '{ print $1 }')
+    if [ "$mode" = true ]; then echo "${fvgen:-0}" >> fvgen.txt; fi
+    echo "run $r, analyzers=$mode: build ${seconds} s, FvGen analyzer time ${fvgen:--} s"
+  done
 done
-# The last compiler call of the log is the benchmark project's own (the references are built first).
-echo "--- compiler analyzer report for the benchmark project (analyzers=true) ---"
-awk '/Total analyzer execution time/ { block = "" } { block = block $0 "\n" } END { }' build-true.log > /dev/null
-grep -n "Total analyzer execution time" build-true.log | tail -1
-grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+FvGen\.Analyzers" build-true.log | tail -8 | cut -c1-120
-echo "FVC diagnostics reported: $(grep -c 'warning FVC' build-true.log || true)"
+echo "--- compiler analyzer report of the last build with the analyzers ---"
+(grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+FvGen\.Analyzers" build-true.log || true) | tail -8 | cut -c1-120
 # Analyzers are skipped by the compiler when all their diagnostics are suppressed: keep FVC rules enabled here.
-echo "kernels: $N, files in $WORK"
+echo "FVC diagnostics reported: $(grep -c 'warning FVC' build-true.log || true)"
+without=$(median < times-false.txt)
+with=$(median < times-true.txt)
+analyzers=$(median < fvgen.txt)
+echo "--- medians of $R runs, $N kernels, $(nproc) cores, load average now $(cut -d' ' -f1-3 /proc/loadavg) ---"
+echo "build without analyzers: $without s"
+echo "build with analyzers:    $with s"
+echo "FvGen analyzer time:     $analyzers s ($(echo "scale=1; 100 * $analyzers / $with" | bc) % of the build with them)"
+echo "build time added:        $(echo "scale=1; 100 * ($with - $without) / $without" | bc) % of the build without them"
+echo "files in $WORK"
