@@ -1,5 +1,4 @@
 using System.Collections.Generic;
-using System.Linq;
 
 namespace FvGen.Analyzers.Conservation;
 
@@ -15,7 +14,12 @@ internal static class LinearSolver
     /// </summary>
     public static Rational[]? Solve(List<Rational[]> rows, int unknowns)
     {
-        var m = rows.Select(r => (Rational[])r.Clone()).ToList();
+        var m = new List<Rational[]>(rows.Count);
+        foreach (var r in rows)
+        {
+            m.Add((Rational[])r.Clone());
+        }
+
         var pivotColumnOfRow = new List<int>();
         int row = 0;
         for (int col = 0; col < unknowns && row < m.Count; col++)
@@ -66,10 +70,22 @@ internal static class LinearSolver
             }
         }
 
-        var x = Enumerable.Repeat(Rational.Zero, unknowns).ToArray();
+        var x = Zeros(unknowns);
         for (int r = 0; r < pivotColumnOfRow.Count; r++)
         {
             x[pivotColumnOfRow[r]] = m[r][unknowns];
+        }
+
+        return x;
+    }
+
+    /// <summary>The zero vector, the solution when every row is trivially satisfied.</summary>
+    public static Rational[] Zeros(int unknowns)
+    {
+        var x = new Rational[unknowns];
+        for (int k = 0; k < unknowns; k++)
+        {
+            x[k] = Rational.Zero;
         }
 
         return x;

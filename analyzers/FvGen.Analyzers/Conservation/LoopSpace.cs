@@ -1,3 +1,4 @@
+using System.Collections.Generic;
 using System.Collections.Immutable;
 using System.Linq;
 
@@ -28,4 +29,23 @@ internal sealed class LoopSpace
     public static LoopSpace Lattice(params string[] names) => new(names.Select(n => new LoopVariable(n, 1, LoopVariableKind.Lattice)).ToImmutableArray());
 
     public LoopVariable? Find(string name) => Variables.FirstOrDefault(v => v.Name == name);
+
+    /// <summary>The lattice variables in order: the unknowns of every shift system, collected once per space.</summary>
+    public IReadOnlyList<LoopVariable> LatticeVariables => _lattice ??= CollectLattice(Variables);
+
+    private LoopVariable[]? _lattice;
+
+    private static LoopVariable[] CollectLattice(ImmutableArray<LoopVariable> variables)
+    {
+        var lattice = new List<LoopVariable>(variables.Length);
+        foreach (var v in variables)
+        {
+            if (v.Kind == LoopVariableKind.Lattice)
+            {
+                lattice.Add(v);
+            }
+        }
+
+        return lattice.ToArray();
+    }
 }

@@ -98,12 +98,12 @@ internal static class ShiftMatcher
     /// <summary>The integer shift vector that maps every first index of a pair onto its second, or null.</summary>
     public static ImmutableDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
     {
-        if (pairs.All(p => p.A.Constant.IsConstant && p.B.Constant.IsConstant && p.A.Linear.All(l => l.Value.IsConstant)))
+        if (AllConstant(pairs))
         {
             return SolveConstant(pairs, space);
         }
 
-        var unknowns = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
+        var unknowns = space.LatticeVariables;
         var rowsByMonomial = new List<Rational[]>();
         foreach (var (a, b) in pairs)
         {
@@ -135,10 +135,46 @@ internal static class ShiftMatcher
             }
         }
 
-        var x = LinearSolver.Solve(rowsByMonomial, unknowns.Count);
-        if (x is null || x.Any(value => !value.IsInteger))
+        return ToShift(LinearSolver.Solve(rowsByMonomial, unknowns.Count), unknowns);
+    }
+
+    /// <summary>True when no index of any pair carries a symbol: each pair then gives one row of plain numbers.</summary>
+    private static bool AllConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs)
+    {
+        for (int n = 0; n < pairs.Count; n++)
+        {
+            var (a, b) = pairs[n];
+            if (!a.Constant.IsConstant || !b.Constant.IsConstant)
+            {
+                return false;
+            }
+
+            foreach (var l in a.Linear)
+            {
+                if (!l.Value.IsConstant)
+                {
+                    return false;
+                }
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>The shift named by a solution (each unknown counts steps of its variable), or null when there is none or it is not integral.</summary>
+    private static ImmutableDictionary<string, long>? ToShift(Rational[]? x, IReadOnlyList<LoopVariable> unknowns)
+    {
+        if (x is null)
         {
             return null;
+        }
+
+        foreach (var value in x)
+        {
+            if (!value.IsInteger)
+            {
+                return null;
+            }
         }
 
         var result = ImmutableDictionary.CreateBuilder<string, long>(StringComparer.Ordinal);
@@ -153,7 +189,7 @@ internal static class ShiftMatcher
     /// <summary>The same system when no index carries a symbol (the common case): one row per pair.</summary>
     private static ImmutableDictionary<string, long>? SolveConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
     {
-        var unknowns = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
+        var unknowns = space.LatticeVariables;
         var rows = new List<Rational[]>(pairs.Count);
         foreach (var (a, b) in pairs)
         {
@@ -169,27 +205,26 @@ internal static class ShiftMatcher
             }
 
             row[unknowns.Count] = b.Constant.ConstantValue - a.Constant.ConstantValue;
-            if (row.All(r => r.IsZero))
+            if (!IsZeroRow(row))
             {
-                continue;
+                rows.Add(row);
             }
-
-            rows.Add(row);
         }
 
-        var x = rows.Count == 0 ? new Rational[unknowns.Count].Select(_ => Rational.Zero).ToArray() : LinearSolver.Solve(rows, unknowns.Count);
-        if (x is null || x.Any(value => !value.IsInteger))
+        return ToShift(rows.Count == 0 ? LinearSolver.Zeros(unknowns.Count) : LinearSolver.Solve(rows, unknowns.Count), unknowns);
+    }
+
+    private static bool IsZeroRow(Rational[] row)
+    {
+        foreach (var r in row)
         {
-            return null;
+            if (!r.IsZero)
+            {
+                return false;
+            }
         }
 
-        var result = ImmutableDictionary.CreateBuilder<string, long>(StringComparer.Ordinal);
-        for (int k = 0; k < unknowns.Count; k++)
-        {
-            result[unknowns[k].Name] = (long)x[k].Numerator * unknowns[k].Step;
-        }
-
-        return result.ToImmutable();
+        return true;
     }
 
     private static Rational Coefficient(SymPoly p, Monomial m)

@@ -55,7 +55,25 @@ internal sealed class Term
 
     public string BodyKey { get; }
 
-    public string BodyShapeKey => _bodyShapeKey ??= string.Join("*", Factors.Select(f => f.ShapeKey).OrderBy(s => s, StringComparer.Ordinal));
+    public string BodyShapeKey => _bodyShapeKey ??= ComputeBodyShapeKey();
+
+    /// <summary>The factors' shape keys in ordinal order (shifting may reorder factors, so their own order will not do).</summary>
+    private string ComputeBodyShapeKey()
+    {
+        if (Factors.Length == 1)
+        {
+            return Factors[0].ShapeKey;
+        }
+
+        var shapes = new string[Factors.Length];
+        for (int k = 0; k < shapes.Length; k++)
+        {
+            shapes[k] = Factors[k].ShapeKey;
+        }
+
+        Array.Sort(shapes, StringComparer.Ordinal);
+        return string.Join("*", shapes);
+    }
 
     public bool IsInvariant => Factors.IsEmpty;
 
