@@ -83,6 +83,17 @@ public sealed class GeneratedKernelsAreProvenTests
     };
 
     /// <summary>
+    /// The structured parallel gather: face fluxes into the face buffer (the periodic wrap face on both of
+    /// its node planes), then each cell sums its low face minus its high face per direction.
+    /// </summary>
+    public static TheoryData<string, string> StructuredGathers => new()
+    {
+        { "1-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid1D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);" },
+        { "2-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid2D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);" },
+        { "3-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid3D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);" },
+    };
+
+    /// <summary>
     /// The unstructured parallel gather: face fluxes into the face buffer, then each cell sums its
     /// faces from the cell-to-face list, with the sign of its side. Checked as the face loop it is.
     /// </summary>
@@ -94,16 +105,11 @@ public sealed class GeneratedKernelsAreProvenTests
     /// </summary>
     public static TheoryData<string, string, string> KernelsNotProven => new()
     {
-        // Each cell sums its low and high faces from the face buffer; the high face of the last cell
-        // wraps to the first on a periodic axis, so its index is chosen by a condition in a cell loop.
         // Second order on unstructured meshes: the face states are built with the runtime's Vec3 arithmetic
         // (metadata, so not visibly component-wise), and Green-Gauss sums gradient components in struct locals.
         { "unstructured Barth-Jespersen", "[ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.Linear)] public static partial void Residual(UnstructuredMesh mesh, ReadOnlySpan<Coolant> state, Span<Coolant> rate, Span<Gradient<Coolant>> gradients, BoundaryBinding<Boundary> boundaries);", "`Vec3.operator -(Vec3, Vec3)` is not visibly component-wise" },
         { "unstructured user reconstruction", "[ResidualKernel(nameof(Upwind), Reconstruction = ReconstructionKind.User, UserReconstruction = nameof(HalfSlope))] public static partial void Residual(UnstructuredMesh mesh, ReadOnlySpan<Coolant> state, Span<Coolant> rate, Span<Gradient<Coolant>> gradients, BoundaryBinding<Boundary> boundaries);", "`Vec3.operator -(Vec3, Vec3)` is not visibly component-wise" },
         { "unstructured gather Barth-Jespersen", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather, Reconstruction = ReconstructionKind.Linear)] public static partial void Residual(UnstructuredMesh mesh, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, Memory<Gradient<Coolant>> gradients, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "`Vec3.operator -(Vec3, Vec3)` is not visibly component-wise" },
-        { "1-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid1D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "the index `xHigh` is chosen by a condition" },
-        { "2-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid2D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "is chosen by a condition" },
-        { "3-D structured gather", "[ResidualKernel(nameof(Upwind), Mode = ExecutionMode.ParallelGather)] public static partial void Residual(StructuredGrid3D grid, ReadOnlyMemory<Coolant> state, Memory<Coolant> rate, [FaceData] Memory<Coolant> faceFlux, BoundaryBinding<Boundary> boundaries, ParallelOptions options);", "is chosen by a condition" },
     };
 
     /// <summary>Slips inserted into the gather's per-cell sum: each must be refuted.</summary>
@@ -138,6 +144,43 @@ public sealed class GeneratedKernelsAreProvenTests
         Assert.True(
             inGenerated.Any(d => d.GetMessage(System.Globalization.CultureInfo.InvariantCulture).Contains(reason, StringComparison.Ordinal)),
             description + ": expected FVC0100 saying `" + reason + "`, got:\n" + AnalyzerRun.Describe(inGenerated));
+    }
+
+    /// <summary>Slips inserted into the structured gather's per-cell sum (2-D): each must be refuted.</summary>
+    public static TheoryData<string, string, string> StructuredGatherSlips => new()
+    {
+        { "x high face added", "faceFlux[xLow] - faceFlux[xHigh]", "faceFlux[xLow] + faceFlux[xHigh]" },
+        { "x high face dropped", "faceFlux[xLow] - faceFlux[xHigh]", "faceFlux[xLow]" },
+        { "y low face subtracted", "sum += faceFlux[yLow];", "sum -= faceFlux[yLow];" },
+        { "y high face read at the x high face", "sum -= faceFlux[yHigh];", "sum -= faceFlux[xHigh];" },
+    };
+
+    [Theory]
+    [MemberData(nameof(StructuredGathers))]
+    public async Task GeneratedStructuredGatherProvesConservative(string description, string kernel)
+    {
+        var (generated, generatedTrees) = Generate(description, kernel);
+
+        var inGenerated = (await AnalyzeAsync(generated)).Where(d => d.Location.SourceTree is { } t && generatedTrees.Contains(t)).ToList();
+
+        Assert.True(inGenerated.Count == 0, description + ": the gather should prove conservative, but:\n" + AnalyzerRun.Describe(inGenerated));
+    }
+
+    [Theory]
+    [MemberData(nameof(StructuredGatherSlips))]
+    public async Task SlipInsertedIntoTheGeneratedStructuredGatherIsCaught(string description, string from, string to)
+    {
+        var (generated, generatedTrees) = Generate("2-D structured gather", (string)StructuredGathers.ElementAt(1)[1]);
+        var residualTree = generatedTrees.Single(t => t.FilePath.EndsWith(".Residual.g.cs", StringComparison.Ordinal));
+        string text = residualTree.GetText().ToString();
+        Assert.True(text.Split(from).Length == 2, description + ": `" + from + "` should occur once in the generated gather");
+        var broken = generated.ReplaceSyntaxTree(
+            residualTree,
+            CSharpSyntaxTree.ParseText(text.Replace(from, to), (CSharpParseOptions)residualTree.Options, residualTree.FilePath));
+
+        var found = (await AnalyzeAsync(broken)).Select(d => d.Id).ToList();
+
+        Assert.True(found.Any(id => id is "FVC0001" or "FVC0002" or "FVC0004"), description + ": expected a conservation warning, got " + string.Join(", ", found));
     }
 
     [Fact]
