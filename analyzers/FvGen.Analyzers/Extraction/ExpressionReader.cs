@@ -546,6 +546,13 @@ internal sealed class ExpressionReader
     /// </summary>
     private SumExpr ReadUserOperator(IBinaryOperation binary, IMethodSymbol op)
     {
+        if (IsTrustedGeometryOperator(op))
+        {
+            // Vec3 arithmetic of the runtime: a value of geometry, never a term of a conserved state, so
+            // an uninterpreted function of its operands (the same operands give the same value).
+            return Opaque(op.ContainingType.Name + "." + op.Name, binary.Syntax, Read(binary.LeftOperand), Read(binary.RightOperand));
+        }
+
         RequireComponentWise(op, binary.Syntax);
         bool leftScalar = IsScalar(binary.LeftOperand.Type);
         bool rightScalar = IsScalar(binary.RightOperand.Type);
@@ -563,6 +570,18 @@ internal sealed class ExpressionReader
                 return Opaque(op.ContainingType.Name + "." + op.Name, binary.Syntax, Read(binary.LeftOperand), Read(binary.RightOperand));
         }
     }
+
+    /// <summary>
+    /// An operator of the runtime's geometry values (<c>FvGen.Geometry</c>, seen as metadata, which the
+    /// purity checker trusts), whose result is a geometry value too, never a conserved state: read as a
+    /// call, whatever its body does with the components. (<c>[Pure]</c> of System.Diagnostics.Contracts
+    /// cannot declare it: that attribute is conditional on CONTRACTS_FULL and absent from metadata.)
+    /// </summary>
+    private bool IsTrustedGeometryOperator(IMethodSymbol op) =>
+        op.DeclaringSyntaxReferences.IsEmpty
+        && op.ContainingType?.ContainingNamespace?.ToDisplayString() == "FvGen.Geometry"
+        && op.ReturnType.ContainingNamespace?.ToDisplayString() == "FvGen.Geometry"
+        && _method.Purity.Classify(op) is { Kind: PurityKind.Pure, WrittenParameters.Count: 0 };
 
     /// <summary>A user-defined operator is read as arithmetic only when it is component-wise (<see cref="ComponentWiseOperators"/>).</summary>
     public static void RequireComponentWise(IMethodSymbol op, SyntaxNode where)

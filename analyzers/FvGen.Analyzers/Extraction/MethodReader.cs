@@ -381,7 +381,12 @@ internal static class MethodReader
         }
 
         var writtenAt = new HashSet<string>(targets.Select(SubscriptText), System.StringComparer.Ordinal);
-        var differenced = new HashSet<string>(subscripts.Where(s => s.Value.Any(i => !writtenAt.Contains(i))).Select(s => s.Key), System.StringComparer.Ordinal);
+        // Read at a subscript the loop does not write, or (a face loop writing two cells) at two of the
+        // cells it writes: each of those cells then reads the array at its neighbour (`g[left]` and
+        // `g[right]` feeding the flux given to `r[left]` and `r[right]`).
+        var differenced = new HashSet<string>(
+            subscripts.Where(s => s.Value.Any(i => !writtenAt.Contains(i)) || (writtenAt.Count > 1 && s.Value.Count > 1)).Select(s => s.Key),
+            System.StringComparer.Ordinal);
         return (written, read, differenced, onlyAssigned);
     }
 

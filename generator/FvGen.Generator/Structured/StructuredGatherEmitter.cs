@@ -12,9 +12,10 @@ namespace FvGen.Generator.Structured;
 /// </summary>
 /// <remarks>
 /// Face buffer layout: the faces of direction x, then y, then z. Within a direction the face on node
-/// plane p (between cells p − 1 and p; p = 0 is the low boundary face, or the wrap face of a periodic
-/// direction) is numbered like a cell whose index along that direction is p, with n + 1 planes (n when
-/// periodic) in place of n cells. Every stored value is the flux · area toward +axis, so a low boundary
+/// plane p (between cells p − 1 and p; p = 0 and p = n are the boundary faces) is numbered like a cell
+/// whose index along that direction is p, with n + 1 planes in place of n cells. On a periodic direction
+/// the wrap face lies on planes 0 and n and is stored on both (the same value, computed once), so every
+/// cell's high face is its low face plus the direction's stride, with no condition. Every stored value is the flux · area toward +axis, so a low boundary
 /// face stores minus its outward flux (an exact negation). Each value is computed by the same operations
 /// whatever the thread count and each cell adds its faces in one fixed order, so the residual is bitwise
 /// identical for any number of threads. The tally is summed serially in face order, as in serial scatter.
@@ -69,7 +70,12 @@ internal static class StructuredGatherEmitter
             w.Line();
             w.Open("if (mesh.IsPeriodic(" + d + "))");
             int axis = d;
-            StructuredEmitter.Periodic(w, model, dim, d, body => body.Line("faceFlux[" + FaceIndex(dim, axis, "0") + "] = flux;"));
+            StructuredEmitter.Periodic(w, model, dim, d, body =>
+            {
+                // The wrap face on both of its node planes, so that every cell's high face is its low face + stride.
+                body.Line("faceFlux[" + FaceIndex(dim, axis, "0") + "] = flux;");
+                body.Line("faceFlux[" + FaceIndex(dim, axis, Count[axis]) + "] = flux;");
+            });
             w.Close();
             if (hasBoundaries)
             {
@@ -85,7 +91,7 @@ internal static class StructuredGatherEmitter
         w.Line("// Phase 2: each cell sums its faces in the fixed order " + string.Join(", ", Enumerable.Range(0, dim).Select(a => Axis[a] + "-low, " + Axis[a] + "-high"))
             + ", in parallel " + (dim == 1 ? "chunks of " + chunk + " cells." : Axis[dim - 1] + " slabs."));
         w.Line("global::System.Threading.Tasks.Parallel.For(0, " + (dim == 1 ? "(nx + " + chunk + " - 1) / " + chunk : Count[dim - 1])
-            + ", options, slab => GatherCells(mesh, faceFluxMemory.Span, residualMemory.Span, slab));");
+            + ", options, slab => GatherCells(mesh, faceFluxMemory.Span, residualMemory.Span, " + (dim == 1 ? "slab" : "slab, slab + 1") + "));");
 
         string meshType = model.Parameters.First(p => p.Role == ParameterRole.Mesh).TypeText;
         for (int d = 0; d < dim; d++)
@@ -108,7 +114,10 @@ internal static class StructuredGatherEmitter
         }
 
         w.Line();
-        w.Open("static void GatherCells(" + meshType + " mesh, global::System.ReadOnlySpan<" + s + "> faceFlux, global::System.Span<" + s + "> residual, int slab)");
+        // In 2-D and 3-D the slab index is a loop variable over [first, end), so that the cell sums read as
+        // one loop nest over every index of the cell.
+        w.Open("static void GatherCells(" + meshType + " mesh, global::System.ReadOnlySpan<" + s + "> faceFlux, global::System.Span<" + s + "> residual, "
+            + (dim == 1 ? "int slab)" : "int first, int end)"));
         for (int a = 0; a < dim; a++)
         {
             w.Line("int " + Count[a] + " = mesh." + Axis[a].ToUpperInvariant() + ".CellCount;");
@@ -129,7 +138,8 @@ internal static class StructuredGatherEmitter
         }
         else
         {
-            w.Line("int " + Index[dim - 1] + " = slab;");
+            w.Open("for (int " + Index[dim - 1] + " = first; " + Index[dim - 1] + " < end; " + Index[dim - 1] + "++)");
+            opened++;
             for (int a = dim - 2; a >= 0; a--)
             {
                 w.Open("for (int " + Index[a] + " = 0; " + Index[a] + " < " + Count[a] + "; " + Index[a] + "++)");
@@ -142,7 +152,7 @@ internal static class StructuredGatherEmitter
         {
             string ax = Axis[a];
             w.Line("int " + ax + "Low = " + FaceIndex(dim, a, Index[a]) + ";");
-            w.Line("int " + ax + "High = " + Index[a] + " + 1 < " + ax + "Planes ? " + ax + "Low + " + Stride[a] + " : " + ax + "Low - " + (a == 0 ? "i" : Stride[a] + " * " + Index[a]) + ";");
+            w.Line("int " + ax + "High = " + ax + "Low + " + Stride[a] + ";");
         }
 
         w.Line(s + " sum = faceFlux[xLow] - faceFlux[xHigh];");
@@ -161,12 +171,12 @@ internal static class StructuredGatherEmitter
         w.Close();
     }
 
-    /// <summary>Declares the node planes of faces per direction and where the y and z faces start in the buffer.</summary>
+    /// <summary>Declares the node planes of faces per direction (n + 1, periodic or not) and where the y and z faces start in the buffer.</summary>
     private static void DeclarePlanes(IndentedWriter w, int dim)
     {
         for (int a = 0; a < dim; a++)
         {
-            w.Line("int " + Axis[a] + "Planes = mesh.IsPeriodic(" + a + ") ? " + Count[a] + " : " + Count[a] + " + 1;");
+            w.Line("int " + Axis[a] + "Planes = " + Count[a] + " + 1;");
         }
 
         if (dim >= 2)

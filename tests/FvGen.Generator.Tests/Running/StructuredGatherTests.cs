@@ -124,14 +124,14 @@ public sealed class StructuredGatherTests
     public void FaceBufferSmallerThanTheGridsFaceCountIsRejected()
     {
         var grid = new StructuredGrid2D(GridAxis.Uniform(4, 0, 1), GridAxis.Uniform(3, 0, 1), SideBoundary.Periodic, SideBoundary.Periodic, SideBoundary.Periodic, SideBoundary.Periodic);
-        // Periodic in both directions: 4 x 3 x-faces and 4 x 3 y-faces.
-        Assert.Equal(24, grid.FaceCount);
+        // Periodic in both directions: 5 x 3 x-faces and 4 x 4 y-faces, the wrap faces stored on the first and last node planes.
+        Assert.Equal(31, grid.FaceCount);
         // With patches on every side: 5 x 3 x-faces and 4 x 4 y-faces (closed-form count).
         var walled = new StructuredGrid2D(GridAxis.Uniform(4, 0, 1), GridAxis.Uniform(3, 0, 1), SideBoundary.Patch("a"), SideBoundary.Patch("b"), SideBoundary.Patch("c"), SideBoundary.Patch("d"));
         Assert.Equal(31, walled.FaceCount);
         var error = Assert.Throws<ArgumentException>(() =>
-            Advection.Gather2D(grid, new Scalar[12], new Scalar[12], new Scalar[23], new BoundaryBinding<Advection.Boundary>(), null, new ParallelOptions()));
-        Assert.Contains("the face buffer holds 23 faces; the mesh has 24", error.Message);
+            Advection.Gather2D(grid, new Scalar[12], new Scalar[12], new Scalar[30], new BoundaryBinding<Advection.Boundary>(), null, new ParallelOptions()));
+        Assert.Contains("the face buffer holds 30 faces; the mesh has 31", error.Message);
     }
 
     private delegate void SerialKernel<TGrid>(TGrid grid, ReadOnlySpan<Scalar> u, Span<Scalar> dudt, BoundaryBinding<Advection.Boundary> boundaries, BoundaryFluxTally? tally);

@@ -56,16 +56,16 @@ public sealed class StructuredGridTests
     }
 
     [Fact]
-    public void FaceCountCountsNodePlanesPerDirectionWithPeriodicPlanesOnce()
+    public void FaceCountCountsNodePlanesPerDirectionWithThePeriodicWrapFaceOnBothPlanes()
     {
-        // Counted by hand: x periodic (4 planes of 3 x 2 faces), y walled (4 planes of 4 x 2), z walled (3 planes of 4 x 3).
+        // Counted by hand: x periodic (5 planes of 3 x 2 faces, the wrap face on the first and last), y walled (4 planes of 4 x 2), z walled (3 planes of 4 x 3).
         var wall = SideBoundary.Patch("wall");
         var grid = new StructuredGrid3D(
             GridAxis.Uniform(4, 0, 1), GridAxis.Uniform(3, 0, 1), GridAxis.Uniform(2, 0, 1),
             SideBoundary.Periodic, SideBoundary.Periodic, wall, wall, wall, wall);
 
-        Assert.Equal(4 * 3 * 2 + 4 * 4 * 2 + 3 * 4 * 3, grid.FaceCount);
+        Assert.Equal(5 * 3 * 2 + 4 * 4 * 2 + 3 * 4 * 3, grid.FaceCount);
         Assert.Equal(11, new StructuredGrid1D(GridAxis.Uniform(10, 0, 1), wall, wall).FaceCount);
-        Assert.Equal(10, new StructuredGrid1D(GridAxis.Uniform(10, 0, 1), SideBoundary.Periodic, SideBoundary.Periodic).FaceCount);
+        Assert.Equal(11, new StructuredGrid1D(GridAxis.Uniform(10, 0, 1), SideBoundary.Periodic, SideBoundary.Periodic).FaceCount);
     }
 }

@@ -100,9 +100,10 @@ public abstract class StructuredGrid : IMesh
     public IReadOnlyList<string> PatchNames => _patchNames;
 
     /// <summary>
-    /// The number of faces of all directions: along each direction n + 1 node planes of faces, or n when
-    /// it is periodic (the first and last node planes are then one face). A <c>ParallelGather</c>
-    /// kernel's face buffer holds at least this many states.
+    /// The length of a <c>ParallelGather</c> kernel's face buffer: along each direction n + 1 node planes
+    /// of faces, periodic or not. On a periodic direction the first and last node planes are one face,
+    /// which the gather stores on both, so that each cell's high face is its low face plus one stride;
+    /// that direction then has n distinct faces per row, one fewer than this counts.
     /// </summary>
     public int FaceCount
     {
@@ -111,7 +112,7 @@ public abstract class StructuredGrid : IMesh
             long faces = 0;
             for (int d = 0; d < _axes.Length; d++)
             {
-                long planes = _axes[d].CellCount + (IsPeriodic(d) ? 0 : 1);
+                long planes = _axes[d].CellCount + 1;
                 faces += planes * (CellCount / _axes[d].CellCount);
             }
 
