@@ -110,34 +110,20 @@ public sealed class CellGatherTests
     [MemberData(nameof(Conservative))]
     public async Task ConservativeGatherIsProven(string description, string source)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        Assert.True(!result.Fvc.Any(), description + ": expected a proof, got:\n" + AnalyzerRun.Describe(result.Fvc));
+        await Verdicts.AssertProvenAsync(source, description);
     }
 
     [Theory]
     [MemberData(nameof(Broken))]
     public async Task BrokenGatherIsRefuted(string description, string source, string rule)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        var ids = result.Fvc.Select(d => d.Id).ToList();
-        Assert.True(ids.Contains(rule) && !ids.Contains(DiagnosticIds.NotAnalyzed), description + ": expected " + rule + ", got:\n" + AnalyzerRun.Describe(result.Fvc));
+        await Verdicts.AssertRefutedAsync(source, rule, description);
     }
 
     [Theory]
     [MemberData(nameof(NotModelled))]
     public async Task GatherShapesOutsideTheModelAreNotAnalyzed(string description, string source, string reason)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        var diagnostics = result.Fvc.ToList();
-        Assert.True(
-            diagnostics.Count > 0 && diagnostics.All(d => d.Id == DiagnosticIds.NotAnalyzed)
-                && diagnostics.Any(d => d.GetMessage(System.Globalization.CultureInfo.InvariantCulture).Contains(reason, StringComparison.Ordinal)),
-            description + ": expected FVC0100 saying `" + reason + "`, got:\n" + AnalyzerRun.Describe(diagnostics));
+        await Verdicts.AssertNotAnalyzedAsync(source, reason, description, only: true);
     }
 }

@@ -57,34 +57,20 @@ public sealed class FaceBufferRowSumTests
     [Fact]
     public async Task RowSumOfLowMinusHighFacesIsProven()
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + Kernel());
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        Assert.True(!result.Fvc.Any(), "expected a proof, got:\n" + AnalyzerRun.Describe(result.Fvc));
+        await Verdicts.AssertProvenAsync(Kernel(), "row sum of low minus high faces");
     }
 
     [Theory]
     [MemberData(nameof(Broken))]
     public async Task BrokenRowSumIsRefuted(string description, string source, string rule)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        var ids = result.Fvc.Select(d => d.Id).ToList();
-        Assert.True(ids.Contains(rule) && !ids.Contains(DiagnosticIds.NotAnalyzed), description + ": expected " + rule + ", got:\n" + AnalyzerRun.Describe(result.Fvc));
+        await Verdicts.AssertRefutedAsync(source, rule, description);
     }
 
     [Theory]
     [MemberData(nameof(NotModelled))]
     public async Task RowSumOutsideTheModelIsNotAnalyzed(string description, string source, string reason)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        var diagnostics = result.Fvc.ToList();
-        Assert.True(
-            diagnostics.Count > 0 && diagnostics.All(d => d.Id == DiagnosticIds.NotAnalyzed)
-                && diagnostics.Any(d => d.GetMessage(System.Globalization.CultureInfo.InvariantCulture).Contains(reason, StringComparison.Ordinal)),
-            description + ": expected only FVC0100 saying `" + reason + "`, got:\n" + AnalyzerRun.Describe(diagnostics));
+        await Verdicts.AssertNotAnalyzedAsync(source, reason, description, only: true);
     }
 }

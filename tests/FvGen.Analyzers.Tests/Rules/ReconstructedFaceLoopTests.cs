@@ -63,10 +63,7 @@ public sealed class ReconstructedFaceLoopTests
     [Fact]
     public async Task FaceLoopReadingSlopesAtBothCellsIsProven()
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + Source());
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        Assert.True(!result.Fvc.Any(), "expected a proof, got:\n" + AnalyzerRun.Describe(result.Fvc));
+        await Verdicts.AssertProvenAsync(Source(), "face loop reading slopes at both cells");
     }
 
     [Fact]
@@ -84,23 +81,13 @@ public sealed class ReconstructedFaceLoopTests
     [MemberData(nameof(Broken))]
     public async Task SlipInTheFaceLoopIsRefuted(string description, string source, string rule)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        var ids = result.Fvc.Select(d => d.Id).ToList();
-        Assert.True(ids.Contains(rule) && !ids.Contains(DiagnosticIds.NotAnalyzed), description + ": expected " + rule + ", got:\n" + AnalyzerRun.Describe(result.Fvc));
+        await Verdicts.AssertRefutedAsync(source, rule, description);
     }
 
     [Theory]
     [MemberData(nameof(NotModelled))]
     public async Task ShapesOutsideTheModelAreNotProven(string description, string source, string reason)
     {
-        var result = await AnalyzerRun.RunAsync(TestReferences.Usings + source);
-        Assert.Empty(result.CompilerErrors);
-        Assert.Empty(result.Exceptions);
-        var diagnostics = result.Fvc.ToList();
-        Assert.True(
-            diagnostics.Any(d => d.Id == DiagnosticIds.NotAnalyzed && d.GetMessage(System.Globalization.CultureInfo.InvariantCulture).Contains(reason, StringComparison.Ordinal)),
-            description + ": expected FVC0100 saying `" + reason + "`, got:\n" + AnalyzerRun.Describe(diagnostics));
+        await Verdicts.AssertNotAnalyzedAsync(source, reason, description, only: false);
     }
 }
