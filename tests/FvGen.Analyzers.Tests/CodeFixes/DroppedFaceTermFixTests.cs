@@ -97,17 +97,6 @@ public sealed class DroppedFaceTermFixTests
                         r[i] = f[2 * i + 1] - f[2 * i] - f[2 * (i + 1) + 1] + f[2 * (i + 1)];
                 }
             }
-            """,
-            batchFixedSource: """
-            static class Lattice
-            {
-                [ConservativeUpdate]
-                public static void Rate(double[] f, double[] r)
-                {
-                    for (int i = 0; i < r.Length; i++)
-                        r[i] = f[2 * i + 1] - f[2 * i] - f[2 * (i + 1) + 1] + f[2 * (i + 1)];
-                }
-            }
             """);
 
     private static DiagnosticResult Dropped(int location) =>
@@ -236,26 +225,6 @@ public sealed class DroppedFaceTermFixTests
                         }
                 }
             }
-            """,
-            batchFixedSource: """
-            static class Plate
-            {
-                static double Upwind(double a, double b) => a;
-
-                [ConservativeUpdate]
-                public static void Rate(double[,] q, double[,] r, double dx, double dy)
-                {
-                    for (int j = 1; j < q.GetLength(1) - 1; j++)
-                        for (int i = 1; i < q.GetLength(0) - 1; i++)
-                        {
-                            double fluxEast = Upwind(q[i, j], q[i + 1, j]);
-                            double fluxWest = Upwind(q[i - 1, j], q[i, j]);
-                            double fluxNorth = Upwind(q[i, j], q[i, j + 1]);
-                            double fluxSouth = Upwind(q[i, j - 1], q[i, j]);
-                            r[i, j] = -fluxEast / dx - fluxNorth / dy + fluxWest / dx + fluxSouth / dy;
-                        }
-                }
-            }
             """);
 
     [Fact]
@@ -343,12 +312,6 @@ public sealed class DroppedFaceTermFixTests
             """),
             [Dropped(0), Dropped(0)],
             StructKernel("""
-                        Gas fe = Flux(q[i], q[i + 1]);
-                        Gas fw = Flux(q[i - 1], q[i]);
-                        r[i].Rho = -fe.Rho / dx + fw.Rho / dx;
-                        r[i].Mx = -fe.Mx / dx + fw.Mx / dx;
-            """),
-            batchFixedSource: StructKernel("""
                         Gas fe = Flux(q[i], q[i + 1]);
                         Gas fw = Flux(q[i - 1], q[i]);
                         r[i].Rho = -fe.Rho / dx + fw.Rho / dx;

@@ -326,7 +326,7 @@ public sealed class InPlaceSweepFixTests
                 }
             }
             """;
-        await VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, batchFixedSource: fixedSource, equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
+        await VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, equivalenceKey: EquivalenceKeys.TwoPassFaceFlux);
         await AssertCleanAsync(fixedSource);
     }
 
@@ -355,7 +355,7 @@ public sealed class InPlaceSweepFixTests
                 }
             }
             """;
-        return VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, batchFixedSource: fixedSource, equivalenceKey: EquivalenceKeys.ReadOldStateFromCopy);
+        return VerifyCS.VerifyCodeFixAsync(TwoStages, [Swept(0), Swept(1)], fixedSource, equivalenceKey: EquivalenceKeys.ReadOldStateFromCopy);
     }
 
     [Fact]
