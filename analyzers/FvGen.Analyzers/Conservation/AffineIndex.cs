@@ -24,8 +24,10 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     {
         Constant = constant;
         Linear = linear;
-        LinearKey = linearKey ?? string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
+        _linearKey = linearKey ?? (linear.IsEmpty ? string.Empty : null);
     }
+
+    private string? _linearKey;
 
     /// <summary>The non-zero coefficients ordered by variable name (a stable insertion sort: there are one to three).</summary>
     private static ImmutableArray<KeyValuePair<string, SymPoly>> Canonical(IEnumerable<KeyValuePair<string, SymPoly>> linear)
@@ -56,14 +58,18 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     /// <summary>Coefficient of each loop variable, ordinal by variable name, none zero.</summary>
     public ImmutableArray<KeyValuePair<string, SymPoly>> Linear { get; }
 
-    /// <summary>Identifies the linear part only (the "shape" of the index).</summary>
-    public string LinearKey { get; }
+    /// <summary>Identifies the linear part only (the "shape" of the index); built on first use.</summary>
+    public string LinearKey => _linearKey ??= string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
 
     public string Key => _key ??= LinearKey + "|" + Constant;
 
     public bool IsConstant => Linear.IsEmpty;
 
-    public static AffineIndex FromConstant(SymPoly constant) => new(constant, Array.Empty<KeyValuePair<string, SymPoly>>());
+    public static AffineIndex FromConstant(SymPoly constant) =>
+        constant.IsZero ? Zero : new(constant, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, string.Empty);
+
+    /// <summary>The index 0.</summary>
+    public static AffineIndex Zero { get; } = new(SymPoly.Zero, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, string.Empty);
 
     public static AffineIndex Variable(string name) =>
         new(SymPoly.Zero, ImmutableArray.Create(new KeyValuePair<string, SymPoly>(name, SymPoly.One)), null);
@@ -81,8 +87,31 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
         return SymPoly.Zero;
     }
 
-    public static AffineIndex operator +(AffineIndex a, AffineIndex b) =>
-        new(a.Constant + b.Constant, Merge(a.Linear.Concat(b.Linear)));
+    public static AffineIndex operator +(AffineIndex a, AffineIndex b)
+    {
+        if (a.Linear.IsEmpty && a.Constant.IsZero)
+        {
+            return b;
+        }
+
+        if (b.Linear.IsEmpty && b.Constant.IsZero)
+        {
+            return a;
+        }
+
+        var constant = a.Constant + b.Constant;
+        if (b.Linear.IsEmpty)
+        {
+            return new(constant, a.Linear, a._linearKey);
+        }
+
+        if (a.Linear.IsEmpty)
+        {
+            return new(constant, b.Linear, b._linearKey);
+        }
+
+        return new(constant, Merge(a.Linear, b.Linear), null);
+    }
 
     // Negating or scaling by a non-zero factor keeps every coefficient non-zero and the order: still canonical.
     public static AffineIndex operator -(AffineIndex a) =>
@@ -113,15 +142,46 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
         return moved ? new AffineIndex(constant, Linear, LinearKey) : this;
     }
 
-    private static IEnumerable<KeyValuePair<string, SymPoly>> Merge(IEnumerable<KeyValuePair<string, SymPoly>> parts)
+    /// <summary>The sum of two canonical linear parts by one ordered merge (zero sums dropped): still canonical.</summary>
+    private static ImmutableArray<KeyValuePair<string, SymPoly>> Merge(ImmutableArray<KeyValuePair<string, SymPoly>> a, ImmutableArray<KeyValuePair<string, SymPoly>> b)
     {
-        var sum = new Dictionary<string, SymPoly>(StringComparer.Ordinal);
-        foreach (var p in parts)
+        var result = ImmutableArray.CreateBuilder<KeyValuePair<string, SymPoly>>(a.Length + b.Length);
+        int i = 0, j = 0;
+        while (i < a.Length && j < b.Length)
         {
-            sum[p.Key] = sum.TryGetValue(p.Key, out var current) ? current + p.Value : p.Value;
+            int order = string.CompareOrdinal(a[i].Key, b[j].Key);
+            if (order < 0)
+            {
+                result.Add(a[i++]);
+            }
+            else if (order > 0)
+            {
+                result.Add(b[j++]);
+            }
+            else
+            {
+                var sum = a[i].Value + b[j].Value;
+                if (!sum.IsZero)
+                {
+                    result.Add(new KeyValuePair<string, SymPoly>(a[i].Key, sum));
+                }
+
+                i++;
+                j++;
+            }
         }
 
-        return sum;
+        while (i < a.Length)
+        {
+            result.Add(a[i++]);
+        }
+
+        while (j < b.Length)
+        {
+            result.Add(b[j++]);
+        }
+
+        return result.Count == result.Capacity ? result.MoveToImmutable() : result.ToImmutable();
     }
 
     public bool Equals(AffineIndex? other) => other is not null && Key == other.Key;

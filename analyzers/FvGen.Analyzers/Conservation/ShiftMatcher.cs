@@ -76,7 +76,7 @@ internal static class ShiftMatcher
 
             var pairs = MatchReads(first, candidate, ImmutableList<(AffineIndex, AffineIndex)>.Empty);
             var shift = pairs is null ? null : Solve(pairs, space);
-            if (shift is not null && a.Shift(shift).BodyKey == b.BodyKey)
+            if (shift is not null && (ShiftedEquality.Bodies(a, b, shift) ?? a.Shift(shift).BodyKey == b.BodyKey))
             {
                 return new Match(shift, 1);
             }

@@ -162,14 +162,49 @@ internal sealed class SumExpr
             throw new ModelLimitException($"the product expands to more than {MaxTerms * 4} terms");
         }
 
-        return Of(a.Terms.SelectMany(x => b.Terms.Select(y =>
-            new Term(x.Coefficient * y.Coefficient, CancelReciprocals(x.Factors.Concat(y.Factors)), x.Origins.AddRange(y.Origins)))));
+        var products = new Term[a.Terms.Length * b.Terms.Length];
+        int n = 0;
+        foreach (var x in a.Terms)
+        {
+            foreach (var y in b.Terms)
+            {
+                products[n++] = new Term(x.Coefficient * y.Coefficient, Product(x.Factors, y.Factors), x.Origins.AddRange(y.Origins));
+            }
+        }
+
+        return Of(products);
+    }
+
+    /// <summary>The factors of a product of two bodies: one side alone when the other is empty (kept sorted), else both with reciprocal pairs cancelled.</summary>
+    private static IEnumerable<Expr> Product(ImmutableArray<Expr> x, ImmutableArray<Expr> y)
+    {
+        if (x.IsEmpty)
+        {
+            return y;
+        }
+
+        if (y.IsEmpty)
+        {
+            return x;
+        }
+
+        var both = new List<Expr>(x.Length + y.Length);
+        both.AddRange(x);
+        both.AddRange(y);
+        foreach (var f in both)
+        {
+            if (f is ReciprocalExpr)
+            {
+                return CancelReciprocals(both);
+            }
+        }
+
+        return both;
     }
 
     /// <summary>Removes pairs <c>a · 1/a</c> from a product.</summary>
-    private static List<Expr> CancelReciprocals(IEnumerable<Expr> factors)
+    private static List<Expr> CancelReciprocals(List<Expr> list)
     {
-        var list = factors.ToList();
         for (int k = 0; k < list.Count; k++)
         {
             if (list[k] is ReciprocalExpr r && r.Denominator.Terms.Length == 1 && r.Denominator.Terms[0].Coefficient.IsOne && r.Denominator.Terms[0].Factors.Length == 1)

@@ -15,10 +15,53 @@ internal sealed class Term
     public Term(SymPoly coefficient, IEnumerable<Expr> factors, ImmutableArray<int> origins)
     {
         Coefficient = coefficient;
-        var list = factors as IReadOnlyList<Expr> ?? factors.ToList();
-        Factors = IsSorted(list) ? list.ToImmutableArray() : list.OrderBy(f => f.Key, StringComparer.Ordinal).ToImmutableArray();
+        Factors = Sorted(factors);
         Origins = origins.IsDefault ? ImmutableArray<int>.Empty : origins;
-        BodyKey = Factors.Length == 1 ? Factors[0].Key : string.Join("*", Factors.Select(f => f.Key));
+        BodyKey = Factors.Length switch
+        {
+            0 => string.Empty,
+            1 => Factors[0].Key,
+            _ => JoinKeys(Factors),
+        };
+    }
+
+    /// <summary>The factors in ordinal order of their keys (equal keys are equal factors, so the sort need not be stable).</summary>
+    private static ImmutableArray<Expr> Sorted(IEnumerable<Expr> factors)
+    {
+        if (factors is ImmutableArray<Expr> given && IsSorted(given))
+        {
+            return given;
+        }
+
+        var array = factors is ICollection<Expr> collection ? new Expr[collection.Count] : null;
+        if (array is not null)
+        {
+            ((ICollection<Expr>)factors).CopyTo(array, 0);
+        }
+        else
+        {
+            array = factors.ToArray();
+        }
+
+        if (!IsSorted(array))
+        {
+            Array.Sort(array, static (x, y) => string.CompareOrdinal(x.Key, y.Key));
+        }
+
+        var builder = ImmutableArray.CreateBuilder<Expr>(array.Length);
+        builder.AddRange(array);
+        return builder.MoveToImmutable();
+    }
+
+    private static string JoinKeys(ImmutableArray<Expr> factors)
+    {
+        var keys = new string[factors.Length];
+        for (int k = 0; k < keys.Length; k++)
+        {
+            keys[k] = factors[k].Key;
+        }
+
+        return string.Join("*", keys);
     }
 
     /// <summary>The same body with another coefficient: factors and keys carry over as they are.</summary>
@@ -33,9 +76,22 @@ internal sealed class Term
 
     private string? _bodyShapeKey;
 
-    private static bool IsSorted(IReadOnlyList<Expr> factors)
+    private static bool IsSorted(ImmutableArray<Expr> factors)
     {
-        for (int k = 1; k < factors.Count; k++)
+        for (int k = 1; k < factors.Length; k++)
+        {
+            if (string.CompareOrdinal(factors[k - 1].Key, factors[k].Key) > 0)
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    private static bool IsSorted(Expr[] factors)
+    {
+        for (int k = 1; k < factors.Length; k++)
         {
             if (string.CompareOrdinal(factors[k - 1].Key, factors[k].Key) > 0)
             {

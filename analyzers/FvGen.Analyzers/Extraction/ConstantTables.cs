@@ -16,9 +16,9 @@ namespace FvGen.Analyzers.Extraction;
 /// </summary>
 internal static class ConstantTables
 {
-    public static IEnumerable<(string Name, ImmutableArray<Rational> Values)> Find(IOperation body)
+    public static IEnumerable<(string Name, ImmutableArray<Rational> Values)> Find(IOperation body, OperationIndex operations)
     {
-        foreach (var declarator in body.Descendants().OfType<IVariableDeclaratorOperation>())
+        foreach (var declarator in operations.Descendants(body).OfType<IVariableDeclaratorOperation>())
         {
             if (declarator.Symbol.Type is not IArrayTypeSymbol { Rank: 1 } || declarator.GetVariableInitializer()?.Value is not { } value)
             {
@@ -47,7 +47,7 @@ internal static class ConstantTables
                 values.Add(rational);
             }
 
-            if (values.Count == initializer.ElementValues.Length && OnlyElementReads(body, declarator.Symbol) && NameIsUnique(body, declarator.Symbol))
+            if (values.Count == initializer.ElementValues.Length && OnlyElementReads(body, declarator.Symbol, operations) && NameIsUnique(body, declarator.Symbol, operations))
             {
                 yield return (declarator.Symbol.Name, values.ToImmutableArray());
             }
@@ -55,8 +55,8 @@ internal static class ConstantTables
     }
 
     /// <summary>Arrays are known by name: no other local, parameter or member of the method may share it.</summary>
-    private static bool NameIsUnique(IOperation body, ILocalSymbol table) =>
-        body.Descendants().All(op => op switch
+    private static bool NameIsUnique(IOperation body, ILocalSymbol table, OperationIndex operations) =>
+        operations.Descendants(body).All(op => op switch
         {
             IVariableDeclaratorOperation d => SymbolEqualityComparer.Default.Equals(d.Symbol, table) || d.Symbol.Name != table.Name,
             ILocalReferenceOperation l => SymbolEqualityComparer.Default.Equals(l.Local, table) || l.Local.Name != table.Name,
@@ -66,8 +66,8 @@ internal static class ConstantTables
             _ => true,
         });
 
-    private static bool OnlyElementReads(IOperation body, ILocalSymbol table) =>
-        body.Descendants().OfType<ILocalReferenceOperation>()
+    private static bool OnlyElementReads(IOperation body, ILocalSymbol table, OperationIndex operations) =>
+        operations.Descendants(body).OfType<ILocalReferenceOperation>()
             .Where(l => SymbolEqualityComparer.Default.Equals(l.Local, table))
             .All(l => l.Parent is IArrayElementReferenceOperation element && ReferenceEquals(element.ArrayReference, l)
                 && !(element.Parent is IAssignmentOperation a && ReferenceEquals(a.Target, element))

@@ -537,7 +537,8 @@ internal sealed partial class LoopNestReader
         }
 
         var assigned = new List<(IOperation Operation, ILocalSymbol Local)>();
-        foreach (var op in loop.Descendants())
+        var operations = _method.Operations;
+        foreach (var op in operations.Descendants(loop))
         {
             if (op is IVariableDeclaratorOperation declarator)
             {
@@ -566,9 +567,9 @@ internal sealed partial class LoopNestReader
             }
 
             headers ??= new HashSet<IOperation>(
-                loop.DescendantsAndSelf().OfType<IForLoopOperation>()
+                operations.DescendantsAndSelf(loop).OfType<IForLoopOperation>()
                     .SelectMany(h => h.Before.Concat(h.AtLoopBottom))
-                    .SelectMany(h => h.DescendantsAndSelf()));
+                    .SelectMany(h => operations.DescendantsAndSelf(h)));
             if (!headers.Contains(op))
             {
                 result.Add(local);

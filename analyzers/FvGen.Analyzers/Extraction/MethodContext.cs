@@ -8,13 +8,15 @@ namespace FvGen.Analyzers.Extraction;
 /// <summary>What every loop of one method shares: symbols, origins, face arrays, purity, the issues found.</summary>
 internal sealed class MethodContext
 {
-    public MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType)
-        : this(known, purity, containingType, new OriginTable(), new List<ConservationIssue>(), new HashSet<IMethodSymbol>(SymbolEqualityComparer.Default))
+    /// <summary>The context of a method whose body is <paramref name="body"/> (walked once here, see <see cref="OperationIndex"/>).</summary>
+    public MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType, IOperation body)
+        : this(known, purity, containingType, OperationIndex.Of(body), new OriginTable(), new List<ConservationIssue>(), new HashSet<IMethodSymbol>(SymbolEqualityComparer.Default))
     {
     }
 
-    private MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType, OriginTable origins, List<ConservationIssue> issues, HashSet<IMethodSymbol> impureReported)
+    private MethodContext(KnownSymbols known, PurityChecker purity, INamedTypeSymbol? containingType, OperationIndex operations, OriginTable origins, List<ConservationIssue> issues, HashSet<IMethodSymbol> impureReported)
     {
+        Operations = operations;
         Known = known;
         Purity = purity;
         ContainingType = containingType;
@@ -29,7 +31,7 @@ internal sealed class MethodContext
     /// </summary>
     public MethodContext ForLocalFunction(IEnumerable<IParameterSymbol> faceParameters)
     {
-        var context = new MethodContext(Known, Purity, ContainingType, Origins, Issues, _impureReported);
+        var context = new MethodContext(Known, Purity, ContainingType, Operations, Origins, Issues, _impureReported);
         context.FaceParameters.UnionWith(faceParameters);
         return context;
     }
@@ -41,6 +43,9 @@ internal sealed class MethodContext
     public HashSet<IParameterSymbol> FaceParameters { get; } = new(SymbolEqualityComparer.Default);
 
     public KnownSymbols Known { get; }
+
+    /// <summary>The method body's operations, walked once; local functions share it (their bodies are inside).</summary>
+    public OperationIndex Operations { get; }
 
     public PurityChecker Purity { get; }
 

@@ -39,7 +39,7 @@ internal static class MethodReader
     /// <summary>The parameters of a local function to which every call in <paramref name="body"/> passes face data.</summary>
     private static IEnumerable<IParameterSymbol> FaceParametersOf(IMethodSymbol localFunction, IOperation body, MethodContext context)
     {
-        var calls = body.Descendants().OfType<IInvocationOperation>()
+        var calls = context.Operations.Descendants(body).OfType<IInvocationOperation>()
             .Where(i => SymbolEqualityComparer.Default.Equals(i.TargetMethod.OriginalDefinition, localFunction.OriginalDefinition))
             .ToList();
         if (calls.Count == 0)
@@ -78,7 +78,7 @@ internal static class MethodReader
     {
         var nests = new List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)>();
         var outer = new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default);
-        foreach (var (name, values) in ConstantTables.Find(body))
+        foreach (var (name, values) in ConstantTables.Find(body, method.Operations))
         {
             method.ConstantTables[name] = values;
         }
@@ -91,7 +91,7 @@ internal static class MethodReader
         for (int k = 0; k < nests.Count; k++)
         {
             var (loop, bindings) = nests[k];
-            if (IsDefinition(accesses[k], method) || !WritesElements(loop))
+            if (IsDefinition(accesses[k], method) || !WritesElements(loop, method.Operations))
             {
                 // A definition fills face data; a loop writing no array element (a reduction such as
                 // the largest wave speed) updates nothing that could be conservative or not.
@@ -147,13 +147,13 @@ internal static class MethodReader
                 outer[local.Local] = BindOuter(local.Local, assignment.Value, outer, method);
                 return;
             case IExpressionStatementOperation expression when LoopNestReader.IsLoop(expression.Operation, method.Known):
-                AddNest(expression.Operation, outer, nests);
+                AddNest(expression.Operation, outer, nests, method.Operations);
                 return;
-            case IForLoopOperation or IForEachLoopOperation when SwitchesAmongLoops(operation, method.Known) || RunsOverDescriptors(operation, method.Known):
+            case IForLoopOperation or IForEachLoopOperation when SwitchesAmongLoops(operation, method) || RunsOverDescriptors(operation, method):
                 // A loop over boundary patches (by index with a `switch` picking each patch's face loop,
                 // or over the patch descriptors themselves): each inner face loop is checked on its own,
                 // for any value of the patch (a symbol here).
-                foreach (var local in LoopLocals(operation).Concat(AssignedLocals(operation)))
+                foreach (var local in LoopLocals(operation).Concat(AssignedLocals(operation, method.Operations)))
                 {
                     outer[local] = new ValueBinding(SumExpr.Invariant(SymPoly.Symbol(local.Name)));
                 }
@@ -161,7 +161,7 @@ internal static class MethodReader
                 Walk(operation is IForLoopOperation f ? f.Body : ((IForEachLoopOperation)operation).Body, outer, nests, method, localFunctions);
                 return;
             case IForLoopOperation or IForEachLoopOperation:
-                AddNest(operation, outer, nests);
+                AddNest(operation, outer, nests, method.Operations);
                 return;
             case ISwitchOperation switchOperation:
                 foreach (var section in switchOperation.Cases)
@@ -175,7 +175,7 @@ internal static class MethodReader
                 return;
             case IWhileLoopOperation loop:
                 // A time or iteration loop around the kernels: its body is read like the method's.
-                foreach (var local in AssignedLocals(loop))
+                foreach (var local in AssignedLocals(loop, method.Operations))
                 {
                     outer[local] = local.Type is IArrayTypeSymbol || method.Known.IsSpan(local.Type)
                         ? new ArrayBinding(local.Name, DataRole.Cell)
@@ -202,12 +202,12 @@ internal static class MethodReader
         }
     }
 
-    private static void AddNest(IOperation loop, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests)
+    private static void AddNest(IOperation loop, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests, OperationIndex operations)
     {
         nests.Add((loop, new Dictionary<ISymbol, Binding>(outer, SymbolEqualityComparer.Default)));
 
         // A local the loop assigns (a reduction such as the largest wave speed) is, after it, a symbol.
-        foreach (var local in AssignedLocals(loop))
+        foreach (var local in AssignedLocals(loop, operations))
         {
             if (outer.ContainsKey(local))
             {
@@ -260,14 +260,14 @@ internal static class MethodReader
     }
 
     /// <summary>True when the loop's body holds a <c>switch</c> whose sections hold loops.</summary>
-    private static bool SwitchesAmongLoops(IOperation loop, KnownSymbols known) =>
-        loop.Descendants().OfType<ISwitchOperation>().Any(s => s.Descendants().Any(d => LoopNestReader.IsLoop(d, known)));
+    private static bool SwitchesAmongLoops(IOperation loop, MethodContext method) =>
+        method.Operations.Descendants(loop).OfType<ISwitchOperation>().Any(s => method.Operations.Descendants(s).Any(d => LoopNestReader.IsLoop(d, method.Known)));
 
     /// <summary>True for a <c>foreach</c> over non-index elements (<c>BoundaryPatch</c>) whose body holds loops.</summary>
-    private static bool RunsOverDescriptors(IOperation loop, KnownSymbols known) =>
+    private static bool RunsOverDescriptors(IOperation loop, MethodContext method) =>
         loop is IForEachLoopOperation { Locals.Length: > 0 } each
         && !ExpressionReader.IsIntegral(each.Locals[0].Type)
-        && each.Body.DescendantsAndSelf().Any(d => LoopNestReader.IsLoop(d, known));
+        && method.Operations.DescendantsAndSelf(each.Body).Any(d => LoopNestReader.IsLoop(d, method.Known));
 
     private static IEnumerable<ILocalSymbol> LoopLocals(IOperation loop) => loop switch
     {
@@ -310,7 +310,7 @@ internal static class MethodReader
             if (written.All(readLater.Contains) && !written.Any(read.Contains))
             {
                 readByDefinitions.UnionWith(read);
-                bool twoSided = MapsUsed(nests[k].Loop) > 1;
+                bool twoSided = MapsUsed(nests[k].Loop, method.Operations) > 1;
                 foreach (var w in written)
                 {
                     method.FaceArrays.Add(w);
@@ -336,7 +336,7 @@ internal static class MethodReader
         var read = new HashSet<string>(System.StringComparer.Ordinal);
         bool onlyAssigned = true;
         var targets = new HashSet<IOperation>();
-        foreach (var op in loop.Descendants())
+        foreach (var op in method.Operations.Descendants(loop))
         {
             IOperation? target = op switch
             {
@@ -365,7 +365,7 @@ internal static class MethodReader
         }
 
         var subscripts = new Dictionary<string, HashSet<string>>(System.StringComparer.Ordinal);
-        foreach (var op in loop.Descendants())
+        foreach (var op in method.Operations.Descendants(loop))
         {
             if (op is IArrayElementReferenceOperation or IPropertyReferenceOperation { Property.IsIndexer: true } && !targets.Contains(op) && RootOf(op, reader) is { } root)
             {
@@ -390,8 +390,8 @@ internal static class MethodReader
         return (written, read, differenced, onlyAssigned);
     }
 
-    private static bool WritesElements(IOperation loop) =>
-        loop.Descendants().Any(op => op switch
+    private static bool WritesElements(IOperation loop, OperationIndex operations) =>
+        operations.Descendants(loop).Any(op => op switch
         {
             IAssignmentOperation a => IsElementTarget(a.Target),
             IIncrementOrDecrementOperation i => IsElementTarget(i.Target),
@@ -410,10 +410,10 @@ internal static class MethodReader
     }
 
     /// <summary>How many distinct index maps the loop reads cells through (<c>u[left[f]]</c>, <c>u[right[f]]</c>: two).</summary>
-    private static int MapsUsed(IOperation loop)
+    private static int MapsUsed(IOperation loop, OperationIndex operations)
     {
         var maps = new HashSet<string>(System.StringComparer.Ordinal);
-        foreach (var op in loop.Descendants())
+        foreach (var op in operations.Descendants(loop))
         {
             var indices = op switch
             {
@@ -478,8 +478,8 @@ internal static class MethodReader
     private static IOperation Innermost(IArrayElementReferenceOperation element) =>
         element.ArrayReference is IArrayElementReferenceOperation inner ? Innermost(inner) : element.ArrayReference;
 
-    private static IEnumerable<ILocalSymbol> AssignedLocals(IOperation loop) =>
-        loop.Descendants()
+    private static IEnumerable<ILocalSymbol> AssignedLocals(IOperation loop, OperationIndex operations) =>
+        operations.Descendants(loop)
             .Select(op => op switch
             {
                 IAssignmentOperation a => a.Target,

@@ -49,7 +49,7 @@ internal sealed class ConservationAnalysis
 
     private IReadOnlyList<ConservationIssue> Run(IMethodSymbol method, IOperation body)
     {
-        var context = new MethodContext(Known, Purity, method.ContainingType);
+        var context = new MethodContext(Known, Purity, method.ContainingType, body);
         try
         {
             return MethodReader.Analyze(body, context).ToList();
