@@ -795,7 +795,7 @@ internal static class BalanceChecker
     private static bool IsTargetElement(ReadExpr read, UpdateWrite write) =>
         read.Array == write.Array && read.Path == write.Path && SubscriptKey(read) == write.SubscriptKey;
 
-    private static string SubscriptKey(ReadExpr read) => string.Join("][", read.Subscripts.Select(g => string.Join(",", g.Select(s => s.Key))));
+    private static string SubscriptKey(ReadExpr read) => read.SubscriptKey;
 
     private static string CellKey(ClassMember m)
     {

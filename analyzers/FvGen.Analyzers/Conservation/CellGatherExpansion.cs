@@ -139,6 +139,5 @@ internal static class CellGatherExpansion
         }
     }
 
-    private static string SubscriptKey(ImmutableArray<ImmutableArray<IndexTerm>> subscripts) =>
-        string.Join("][", subscripts.Select(g => string.Join(",", g.Select(s => s.Key))));
+    private static string SubscriptKey(ImmutableArray<ImmutableArray<IndexTerm>> subscripts) => UpdateWrite.KeyOf(subscripts);
 }

@@ -15,10 +15,20 @@ internal sealed record UpdateWrite(
     bool IsAssignment,
     int Origin)
 {
-    /// <summary>Identifies the target element (array, component and subscripts).</summary>
-    public string TargetKey => Array + "|" + Path + "|" + SubscriptKey;
+    // Both keys are asked for in every pass of the balance: built once. A copy made with `with`
+    // carries them over, so only Value may change in such a copy (the only one made).
 
-    public string SubscriptKey => string.Join("][", Subscripts.Select(g => string.Join(",", g.Select(s => s.Key))));
+    /// <summary>The subscripts' identity, <c>i,j</c> or <c>left[f]</c> (groups joined by <c>][</c>).</summary>
+    public string SubscriptKey { get; } = KeyOf(Subscripts);
+
+    /// <summary>Identifies the target element (array, component and subscripts).</summary>
+    public string TargetKey { get; } = Array + "|" + Path + "|" + KeyOf(Subscripts);
+
+    /// <summary>The identity of a subscript list, as <see cref="SubscriptKey"/> writes it.</summary>
+    public static string KeyOf(ImmutableArray<ImmutableArray<IndexTerm>> subscripts) =>
+        subscripts.Length == 1 && subscripts[0].Length == 1
+            ? subscripts[0][0].Key
+            : string.Join("][", subscripts.Select(g => string.Join(",", g.Select(s => s.Key))));
 
     /// <summary>C# text of the target element.</summary>
     public string RenderTarget() => Array + string.Concat(Subscripts.Select(g => "[" + string.Join(", ", g.Select(s => s.ToString())) + "]")) + Path;

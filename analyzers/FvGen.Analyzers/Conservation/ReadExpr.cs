@@ -38,7 +38,15 @@ internal sealed class ReadExpr : Expr
     public override string ShapeKey =>
         _shapeKey ??= "R:" + Array + string.Concat(Subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.ShapeKey)) + "]")) + Path;
 
-    public IEnumerable<IndexTerm> AllSubscripts => Subscripts.SelectMany(g => g);
+    /// <summary>Every subscript, group after group (collected once: the balance asks for them per member).</summary>
+    public IReadOnlyList<IndexTerm> AllSubscripts => _allSubscripts ??= Subscripts.SelectMany(g => g).ToArray();
+
+    private IndexTerm[]? _allSubscripts;
+
+    /// <summary>The subscripts' identity, as <see cref="UpdateWrite.SubscriptKey"/> writes it for a target.</summary>
+    public string SubscriptKey => _subscriptKey ??= UpdateWrite.KeyOf(Subscripts);
+
+    private string? _subscriptKey;
 
     public override IEnumerable<ReadExpr> Reads => new[] { this };
 
