@@ -46,7 +46,7 @@ internal static class BalanceChecker
     {
         foreach (var t in update.Writes.SelectMany(w => w.Value.Terms))
         {
-            if (ExprTree.All(t).Any(e => e is CellGatherExpr))
+            if (ExprTree.First<CellGatherExpr>(t) is not null)
             {
                 throw new ModelLimitException("a sum gathered over the face list is used inside `" + Text.Short(t.RenderBody()) + "`, not added to the cell");
             }
@@ -662,21 +662,45 @@ internal static class BalanceChecker
             return true;
         }
 
-        var target = member.Source.Write.Subscripts.SelectMany(g => g).ToList();
-        var targetKeys = new HashSet<string>(target.Select(s => s.Key), StringComparer.Ordinal);
+        var targetKeys = member.Source.Write.TargetSubscriptKeys;
 
         // A boundary loop writes through one map and reads cells through it only; data of its own
         // face (indexed by the map's argument) belongs to that boundary flux.
-        var boundaryFace = new HashSet<string>(target.OfType<MappedSubscript>().SelectMany(m => m.Arguments).Select(a => a.Key), StringComparer.Ordinal);
+        var boundaryFace = member.Source.Write.BoundaryFaceKeys;
         foreach (var read in member.Source.Term.Reads)
         {
-            bool ownFaceData = boundaryFace.Count > 0 && read.Role != DataRole.InteriorFace && read.AllSubscripts.All(s => boundaryFace.Contains(s.Key));
+            bool ownFaceData = boundaryFace.Length > 0 && read.Role != DataRole.InteriorFace && AllIn(read.AllSubscripts, boundaryFace);
             if (ownFaceData)
             {
                 continue;
             }
 
-            if (read.Role != DataRole.Cell || read.AllSubscripts.Any(s => !targetKeys.Contains(s.Key)))
+            if (read.Role != DataRole.Cell || !AllIn(read.AllSubscripts, targetKeys))
+            {
+                return false;
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>True when every subscript's key is one of <paramref name="keys"/> (a few: a scan beats hashing).</summary>
+    private static bool AllIn(IReadOnlyList<IndexTerm> subscripts, ImmutableArray<string> keys)
+    {
+        for (int k = 0; k < subscripts.Count; k++)
+        {
+            string key = subscripts[k].Key;
+            bool found = false;
+            foreach (var candidate in keys)
+            {
+                if (string.Equals(candidate, key, StringComparison.Ordinal))
+                {
+                    found = true;
+                    break;
+                }
+            }
+
+            if (!found)
             {
                 return false;
             }
@@ -756,8 +780,8 @@ internal static class BalanceChecker
     /// </summary>
     private static (SumExpr Sum, Expr? Measure) InverseMeasureWeighted(UpdateWrite write)
     {
-        var targetKeys = new HashSet<string>(write.Subscripts.SelectMany(g => g).Select(s => s.Key), StringComparer.Ordinal);
-        bool ReachesBeyond(Term t) => t.Reads.Any(r => r.Role != DataRole.Cell || r.AllSubscripts.Any(s => !targetKeys.Contains(s.Key)));
+        var targetKeys = write.TargetSubscriptKeys;
+        bool ReachesBeyond(Term t) => t.Reads.Any(r => r.Role != DataRole.Cell || !AllIn(r.AllSubscripts, targetKeys));
         var beyond = write.Value.Terms.Where(ReachesBeyond).ToList();
         if (beyond.Count == 0)
         {

@@ -24,11 +24,45 @@ internal sealed record UpdateWrite(
     /// <summary>Identifies the target element (array, component and subscripts).</summary>
     public string TargetKey { get; } = Array + "|" + Path + "|" + KeyOf(Subscripts);
 
+    /// <summary>The target's subscripts, group after group.</summary>
+    public ImmutableArray<IndexTerm> AllSubscripts { get; } = Subscripts.SelectMany(g => g).ToImmutableArray();
+
+    /// <summary>The distinct keys of <see cref="AllSubscripts"/> (one to three: searched in order): a read at only these reads the target cell.</summary>
+    public ImmutableArray<string> TargetSubscriptKeys { get; } = Subscripts.SelectMany(g => g).Select(s => s.Key).Distinct().ToImmutableArray();
+
+    /// <summary>The keys of the arguments of the maps the target is written through (<c>f</c> of <c>left[f]</c>): the boundary face's own data.</summary>
+    public ImmutableArray<string> BoundaryFaceKeys { get; } =
+        Subscripts.SelectMany(g => g).OfType<MappedSubscript>().SelectMany(m => m.Arguments).Select(a => a.Key).Distinct().ToImmutableArray();
+
     /// <summary>The identity of a subscript list, as <see cref="SubscriptKey"/> writes it.</summary>
-    public static string KeyOf(ImmutableArray<ImmutableArray<IndexTerm>> subscripts) =>
-        subscripts.Length == 1 && subscripts[0].Length == 1
-            ? subscripts[0][0].Key
-            : string.Join("][", subscripts.Select(g => string.Join(",", g.Select(s => s.Key))));
+    public static string KeyOf(ImmutableArray<ImmutableArray<IndexTerm>> subscripts)
+    {
+        if (subscripts.Length == 1 && subscripts[0].Length == 1)
+        {
+            return subscripts[0][0].Key;
+        }
+
+        var text = new System.Text.StringBuilder();
+        for (int g = 0; g < subscripts.Length; g++)
+        {
+            if (g > 0)
+            {
+                text.Append("][");
+            }
+
+            for (int k = 0; k < subscripts[g].Length; k++)
+            {
+                if (k > 0)
+                {
+                    text.Append(',');
+                }
+
+                text.Append(subscripts[g][k].Key);
+            }
+        }
+
+        return text.ToString();
+    }
 
     /// <summary>C# text of the target element.</summary>
     public string RenderTarget() => Array + string.Concat(Subscripts.Select(g => "[" + string.Join(", ", g.Select(s => s.ToString())) + "]")) + Path;

@@ -12,14 +12,12 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
 {
-    private Monomial(ImmutableArray<KeyValuePair<string, int>> powers)
-    {
-        Powers = powers;
-        Key = string.Join("*", powers.Select(p => p.Key + "^" + p.Value));
-    }
+    private Monomial(ImmutableArray<KeyValuePair<string, int>> powers) => Powers = powers;
 
-    /// <summary>A text that identifies the product (equal texts, equal products).</summary>
-    public string Key { get; }
+    private string? _key;
+
+    /// <summary>A text that identifies the product (equal texts, equal products); built on first use.</summary>
+    public string Key => _key ??= string.Join("*", Powers.Select(p => p.Key + "^" + p.Value));
 
     /// <summary>The empty product, 1.</summary>
     public static Monomial One { get; } = new(ImmutableArray<KeyValuePair<string, int>>.Empty);
@@ -44,14 +42,46 @@ internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
             return a;
         }
 
-        var sum = new SortedDictionary<string, int>(StringComparer.Ordinal);
-        foreach (var p in a.Powers.Concat(b.Powers))
+        // Both lists are in ordinal order of their symbols: one ordered merge, zero powers dropped.
+        var x = a.Powers;
+        var y = b.Powers;
+        var merged = ImmutableArray.CreateBuilder<KeyValuePair<string, int>>(x.Length + y.Length);
+        int i = 0, j = 0;
+        while (i < x.Length && j < y.Length)
         {
-            sum.TryGetValue(p.Key, out int current);
-            sum[p.Key] = current + p.Value;
+            int order = string.CompareOrdinal(x[i].Key, y[j].Key);
+            if (order < 0)
+            {
+                merged.Add(x[i++]);
+            }
+            else if (order > 0)
+            {
+                merged.Add(y[j++]);
+            }
+            else
+            {
+                int power = x[i].Value + y[j].Value;
+                if (power != 0)
+                {
+                    merged.Add(new KeyValuePair<string, int>(x[i].Key, power));
+                }
+
+                i++;
+                j++;
+            }
         }
 
-        return new Monomial(sum.Where(p => p.Value != 0).ToImmutableArray());
+        while (i < x.Length)
+        {
+            merged.Add(x[i++]);
+        }
+
+        while (j < y.Length)
+        {
+            merged.Add(y[j++]);
+        }
+
+        return merged.Count == 0 ? One : new Monomial(merged.ToImmutable());
     }
 
     public Monomial Reciprocal() =>

@@ -16,7 +16,7 @@ internal sealed class ReadExpr : Expr
         Subscripts = subscripts;
         Path = path;
         Role = role;
-        Key = "R:" + array + string.Concat(subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.Key)) + "]")) + path;
+        Key = SubscriptText.Of("R:", array, subscripts, path, shape: false);
     }
 
     private string? _shapeKey;
@@ -36,7 +36,7 @@ internal sealed class ReadExpr : Expr
 
     /// <summary>Built on first use: shifted copies made only to compare keys never need it.</summary>
     public override string ShapeKey =>
-        _shapeKey ??= "R:" + Array + string.Concat(Subscripts.Select(g => "[" + string.Join(",", g.Select(s => s.ShapeKey)) + "]")) + Path;
+        _shapeKey ??= SubscriptText.Of("R:", Array, Subscripts, Path, shape: true);
 
     /// <summary>Every subscript, group after group (collected once: the balance asks for them per member).</summary>
     public IReadOnlyList<IndexTerm> AllSubscripts => _allSubscripts ??= Subscripts.SelectMany(g => g).ToArray();

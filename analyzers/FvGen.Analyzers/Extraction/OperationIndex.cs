@@ -15,21 +15,26 @@ internal sealed class OperationIndex
 {
     private readonly IOperation[] _nodes;
     private readonly int[] _ends;
+    private readonly int _count;
     private readonly Dictionary<IOperation, int> _positions;
 
-    private OperationIndex(IOperation[] nodes, int[] ends, Dictionary<IOperation, int> positions)
+    private OperationIndex(IOperation[] nodes, int[] ends, int count, Dictionary<IOperation, int> positions)
     {
         _nodes = nodes;
         _ends = ends;
+        _count = count;
         _positions = positions;
     }
 
     /// <summary>Walks <paramref name="root"/> once (with a stack of its own: expression trees can be deep).</summary>
     public static OperationIndex Of(IOperation root)
     {
-        var nodes = new List<IOperation> { root };
-        var ends = new List<int> { 0 };
-        var open = new List<(int Position, IOperation.OperationList.Enumerator Children)> { (0, root.ChildOperations.GetEnumerator()) };
+        // Grown by doubling and kept as they are: slices never reach past the count.
+        var nodes = new IOperation[256];
+        var ends = new int[256];
+        int count = 0;
+        var open = new List<(int Position, IOperation.OperationList.Enumerator Children)>();
+        Add(root);
         while (open.Count > 0)
         {
             int top = open.Count - 1;
@@ -38,25 +43,40 @@ internal sealed class OperationIndex
             {
                 // The enumerator is a struct: store it back with its new position.
                 open[top] = (position, children);
-                var child = children.Current;
-                nodes.Add(child);
-                ends.Add(0);
-                open.Add((nodes.Count - 1, child.ChildOperations.GetEnumerator()));
+                Add(children.Current);
             }
             else
             {
                 open.RemoveAt(top);
-                ends[position] = nodes.Count;
+                ends[position] = count;
             }
         }
 
-        var positions = new Dictionary<IOperation, int>(nodes.Count, ReferenceComparer.Instance);
-        for (int k = 0; k < nodes.Count; k++)
+        void Add(IOperation node)
         {
-            positions[nodes[k]] = k;
+            if (count == nodes.Length)
+            {
+                Array.Resize(ref nodes, count * 2);
+                Array.Resize(ref ends, count * 2);
+            }
+
+            nodes[count] = node;
+            open.Add((count, node.ChildOperations.GetEnumerator()));
+            count++;
         }
 
-        return new OperationIndex(nodes.ToArray(), ends.ToArray(), positions);
+        // Questions are asked about statements, loops and bodies: only those are keyed (a fifth of
+        // the nodes); any other node is found by a scan.
+        var positions = new Dictionary<IOperation, int>(ReferenceComparer.Instance);
+        for (int k = 0; k < count; k++)
+        {
+            if (IsAskedAbout(nodes[k]))
+            {
+                positions[nodes[k]] = k;
+            }
+        }
+
+        return new OperationIndex(nodes, ends, count, positions);
     }
 
     /// <summary>Every operation under <paramref name="operation"/>, in pre-order, itself excluded.</summary>
@@ -65,9 +85,14 @@ internal sealed class OperationIndex
     /// <summary><paramref name="operation"/> and every operation under it, in pre-order.</summary>
     public ArraySegment<IOperation> DescendantsAndSelf(IOperation operation) => Slice(operation, self: true);
 
+    private static bool IsAskedAbout(IOperation node) =>
+        node is IBlockOperation or ILoopOperation or ISwitchOperation or IExpressionStatementOperation or IVariableDeclarationGroupOperation
+            or ILocalFunctionOperation or IAnonymousFunctionOperation or IMethodBodyBaseOperation or IConditionalOperation or IInvocationOperation
+        || node.Parent is IExpressionStatementOperation;
+
     private ArraySegment<IOperation> Slice(IOperation operation, bool self)
     {
-        if (!_positions.TryGetValue(operation, out int at))
+        if (!_positions.TryGetValue(operation, out int at) && (at = Array.IndexOf(_nodes, operation, 0, _count)) < 0)
         {
             // Only operations of the walked body are asked about; anything else is a bug of the caller.
             throw new ArgumentException("The operation is not part of the indexed body.", nameof(operation));
