@@ -12,6 +12,66 @@ internal static class LinearSolver
     /// Solves <c>A x = b</c> (rows of <paramref name="rows"/>, last entry the right side). Free
     /// unknowns are set to zero. Returns null when the system is inconsistent.
     /// </summary>
+    /// <summary>
+    /// The common system where no row couples two unknowns (each index pair moves one loop variable):
+    /// each unknown is read off its rows, which must agree; unknowns no row names are zero, as in
+    /// <see cref="Solve"/>. False when some row couples unknowns (then <see cref="Solve"/> decides);
+    /// true with a null solution when the system is inconsistent.
+    /// </summary>
+    public static bool TrySolveSeparated(List<Rational[]> rows, int unknowns, out Rational[]? solution)
+    {
+        solution = null;
+        foreach (var row in rows)
+        {
+            int nonZero = 0;
+            for (int c = 0; c < unknowns; c++)
+            {
+                if (!row[c].IsZero)
+                {
+                    nonZero++;
+                }
+            }
+
+            if (nonZero > 1)
+            {
+                return false;
+            }
+        }
+
+        var x = Zeros(unknowns);
+        var known = new bool[unknowns];
+        foreach (var row in rows)
+        {
+            int c = 0;
+            while (c < unknowns && row[c].IsZero)
+            {
+                c++;
+            }
+
+            if (c == unknowns)
+            {
+                if (!row[unknowns].IsZero)
+                {
+                    return true;
+                }
+
+                continue;
+            }
+
+            var value = row[unknowns] / row[c];
+            if (known[c] && x[c] != value)
+            {
+                return true;
+            }
+
+            x[c] = value;
+            known[c] = true;
+        }
+
+        solution = x;
+        return true;
+    }
+
     public static Rational[]? Solve(List<Rational[]> rows, int unknowns)
     {
         var m = new List<Rational[]>(rows.Count);

@@ -67,6 +67,7 @@ internal static class ShiftMatcher
 
         // Many reads of B share A's first read's shape (u[•] in a limiter); each distinct shift is tried once.
         var tried = new HashSet<string>(StringComparer.Ordinal);
+        var pairs = new List<(AffineIndex, AffineIndex)>();
         foreach (var candidate in b.Reads)
         {
             if (candidate.ShapeKey != first.ShapeKey || !tried.Add(candidate.Key))
@@ -74,8 +75,8 @@ internal static class ShiftMatcher
                 continue;
             }
 
-            var pairs = MatchReads(first, candidate, ImmutableList<(AffineIndex, AffineIndex)>.Empty);
-            var shift = pairs is null ? null : Solve(pairs, space);
+            pairs.Clear();
+            var shift = PairReads(first, candidate, pairs) ? Solve(pairs, space) : null;
             if (shift is not null && (ShiftedEquality.Bodies(a, b, shift) ?? a.Shift(shift).BodyKey == b.BodyKey))
             {
                 return new Match(shift, 1);
@@ -135,7 +136,7 @@ internal static class ShiftMatcher
             }
         }
 
-        return ToShift(LinearSolver.Solve(rowsByMonomial, unknowns.Count), unknowns);
+        return ToShift(LinearSolver.TrySolveSeparated(rowsByMonomial, unknowns.Count, out var separated) ? separated : LinearSolver.Solve(rowsByMonomial, unknowns.Count), unknowns);
     }
 
     /// <summary>True when no index of any pair carries a symbol: each pair then gives one row of plain numbers.</summary>
@@ -211,7 +212,12 @@ internal static class ShiftMatcher
             }
         }
 
-        return ToShift(rows.Count == 0 ? LinearSolver.Zeros(unknowns.Count) : LinearSolver.Solve(rows, unknowns.Count), unknowns);
+        if (rows.Count == 0)
+        {
+            return ToShift(LinearSolver.Zeros(unknowns.Count), unknowns);
+        }
+
+        return ToShift(LinearSolver.TrySolveSeparated(rows, unknowns.Count, out var separated) ? separated : LinearSolver.Solve(rows, unknowns.Count), unknowns);
     }
 
     private static bool IsZeroRow(Rational[] row)
@@ -303,6 +309,46 @@ internal static class ShiftMatcher
 
                 yield break;
         }
+    }
+
+    /// <summary>The index pairs of two reads of one array, into <paramref name="pairs"/>; false when their subscripts cannot correspond.</summary>
+    private static bool PairReads(ReadExpr x, ReadExpr y, List<(AffineIndex, AffineIndex)> pairs)
+    {
+        if (x.Array != y.Array || x.Path != y.Path || x.Subscripts.Length != y.Subscripts.Length)
+        {
+            return false;
+        }
+
+        for (int g = 0; g < x.Subscripts.Length; g++)
+        {
+            var gx = x.Subscripts[g];
+            var gy = y.Subscripts[g];
+            if (gx.Length != gy.Length)
+            {
+                return false;
+            }
+
+            for (int k = 0; k < gx.Length; k++)
+            {
+                switch (gx[k], gy[k])
+                {
+                    case (AffineSubscript ax, AffineSubscript ay):
+                        pairs.Add((ax.Index, ay.Index));
+                        break;
+                    case (MappedSubscript mx, MappedSubscript my) when mx.Map == my.Map && mx.Arguments.Length == my.Arguments.Length:
+                        for (int n = 0; n < mx.Arguments.Length; n++)
+                        {
+                            pairs.Add((mx.Arguments[n], my.Arguments[n]));
+                        }
+
+                        break;
+                    default:
+                        return false;
+                }
+            }
+        }
+
+        return true;
     }
 
     private static ImmutableList<(AffineIndex, AffineIndex)>? MatchReads(ReadExpr x, ReadExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
