@@ -4,12 +4,16 @@
 # wall time, the compiler's own analyzer timing (-p:ReportAnalyzer=true) and the medians with ratios.
 # The analyzers are referenced as a built DLL, the way the package delivers them, so the build with
 # them does not also pay for building the analyzer project. Not part of the test run: speed is never
-# asserted. Usage: tests/FvGen.Analyzers.Tests/Benchmark/run-analyzer-benchmark.sh [N] [R] [work-dir]
+# asserted. Usage: tests/FvGen.Analyzers.Tests/Benchmark/run-analyzer-benchmark.sh [N] [R] [work-dir] [what]
+# what: fvgen (default) measures the FvGen analyzers as built; floor measures an analyzer that
+# registers the same actions and only walks the operations (what asking for operation trees costs);
+# ready-to-run measures the FvGen analyzers precompiled with crossgen2 (restored from NuGet).
 set -euo pipefail
 N="${1:-500}"
 R="${2:-3}"
 REPO="$(cd "$(dirname "$0")/../../.." && pwd)"
 WORK="${3:-$(mktemp -d)}"
+WHAT="${4:-fvgen}"
 CORPUS="$REPO/tests/FvGen.Analyzers.Tests/Corpus"
 mkdir -p "$WORK/Kernels"
 mapfile -t FILES < <(ls "$CORPUS"/*.cs | sort)
@@ -23,6 +27,37 @@ for ((k = 0; k < N; k++)); do
 done
 dotnet build "$REPO/analyzers/FvGen.Analyzers/FvGen.Analyzers.csproj" -c Release > /dev/null
 ANALYZER="$REPO/analyzers/FvGen.Analyzers/bin/Release/netstandard2.0/FvGen.Analyzers.dll"
+NAME="FvGen.Analyzers"
+case "$WHAT" in
+  fvgen) ;;
+  floor)
+    dotnet build "$REPO/benchmarks/FvGen.Benchmarks.AnalyzerFloor/FvGen.Benchmarks.AnalyzerFloor.csproj" -c Release > /dev/null
+    ANALYZER="$REPO/benchmarks/FvGen.Benchmarks.AnalyzerFloor/bin/Release/netstandard2.0/FvGen.Benchmarks.AnalyzerFloor.dll"
+    NAME="FvGen.Benchmarks.AnalyzerFloor"
+    ;;
+  ready-to-run)
+    # crossgen2 of the running runtime's version, against that runtime and the SDK's own compiler.
+    RUNTIME=$(dotnet --list-runtimes | awk '$1 == "Microsoft.NETCore.App" { v = $2; p = $3 } END { gsub(/[][]/, "", p); print v "|" p }')
+    VERSION="${RUNTIME%%|*}"
+    FRAMEWORK="${RUNTIME#*|}/$VERSION"
+    SDK=$(dotnet --list-sdks | tail -1 | awk '{ v = $1; p = $2; gsub(/[][]/, "", p); print p "/" v }')
+    RID=$(dotnet --info | awk '/RID:/ { print $2; exit }')
+    mkdir -p "$WORK/crossgen"
+    cat > "$WORK/crossgen/Crossgen.csproj" <<XML
+<Project Sdk="Microsoft.NET.Sdk">
+  <PropertyGroup><TargetFramework>net10.0</TargetFramework><ManagePackageVersionsCentrally>false</ManagePackageVersionsCentrally><ImportDirectoryBuildProps>false</ImportDirectoryBuildProps></PropertyGroup>
+  <ItemGroup><PackageDownload Include="Microsoft.NETCore.App.Crossgen2.$RID" Version="[$VERSION]" /></ItemGroup>
+</Project>
+XML
+    dotnet restore "$WORK/crossgen/Crossgen.csproj" > /dev/null
+    CROSSGEN="$(dotnet nuget locals global-packages --list | awk '{ print $NF }')/microsoft.netcore.app.crossgen2.$RID/$VERSION/tools/crossgen2"
+    "$CROSSGEN" "$ANALYZER" -o "$WORK/crossgen/FvGen.Analyzers.dll" -O --targetos "${RID%-*}" --targetarch "${RID#*-}" \
+      -r "$FRAMEWORK/*.dll" -r "$SDK/Roslyn/bincore/Microsoft.CodeAnalysis.dll" -r "$SDK/Roslyn/bincore/Microsoft.CodeAnalysis.CSharp.dll" > /dev/null
+    ANALYZER="$WORK/crossgen/FvGen.Analyzers.dll"
+    ;;
+  *) echo "unknown analyzer to measure: $WHAT (fvgen, floor or ready-to-run)" >&2; exit 2 ;;
+esac
+echo "measuring $ANALYZER"
 cat > "$WORK/Bench.csproj" <<XML
 <Project Sdk="Microsoft.NET.Sdk">
   <PropertyGroup>
@@ -58,13 +93,13 @@ for ((r = 1; r <= R; r++)); do
     seconds=$(echo "$end - $start" | bc)
     echo "$seconds" >> "times-$mode.txt"
     # The analyzer report of the benchmark project's compiler call (the last one in the log).
-    fvgen=$( (grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+FvGen\.Analyzers, Version" "build-$mode.log" || true) | tail -1 | awk '{ print $1 }')
+    fvgen=$( (grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+${NAME//./\\.}, Version" "build-$mode.log" || true) | tail -1 | awk '{ print $1 }')
     if [ "$mode" = true ]; then echo "${fvgen:-0}" >> fvgen.txt; fi
     echo "run $r, analyzers=$mode: build ${seconds} s, FvGen analyzer time ${fvgen:--} s"
   done
 done
 echo "--- compiler analyzer report of the last build with the analyzers ---"
-(grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+FvGen\.Analyzers" build-true.log || true) | tail -8 | cut -c1-120
+(grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+${NAME//./\\.}" build-true.log || true) | tail -8 | cut -c1-120
 # Analyzers are skipped by the compiler when all their diagnostics are suppressed: keep FVC rules enabled here.
 echo "FVC diagnostics reported: $(grep -c 'warning FVC' build-true.log || true)"
 without=$(median < times-false.txt)
