@@ -572,15 +572,16 @@ internal sealed class ExpressionReader
     }
 
     /// <summary>
-    /// An operator of the runtime's geometry values (<c>FvGen.Geometry</c>, seen as metadata, which the
-    /// purity checker trusts), whose result is a geometry value too, never a conserved state: read as a
-    /// call, whatever its body does with the components. (<c>[Pure]</c> of System.Diagnostics.Contracts
-    /// cannot declare it: that attribute is conditional on CONTRACTS_FULL and absent from metadata.)
+    /// A compiled operator of a type marked <c>[GeometryValue]</c> whose result is such a value too
+    /// (the runtime's <c>Vec3</c>): never a conserved state, so read as a call, whatever its body does
+    /// with the components. The purity checker trusts those members as the attribute declares.
+    /// (<c>[Pure]</c> of System.Diagnostics.Contracts cannot declare this: it is conditional on
+    /// CONTRACTS_FULL and absent from metadata.)
     /// </summary>
     private bool IsTrustedGeometryOperator(IMethodSymbol op) =>
         op.DeclaringSyntaxReferences.IsEmpty
-        && op.ContainingType?.ContainingNamespace?.ToDisplayString() == "FvGen.Geometry"
-        && op.ReturnType.ContainingNamespace?.ToDisplayString() == "FvGen.Geometry"
+        && Known.IsGeometryValue(op.ContainingType)
+        && Known.IsGeometryValue(op.ReturnType)
         && _method.Purity.Classify(op) is { Kind: PurityKind.Pure, WrittenParameters.Count: 0 };
 
     /// <summary>A user-defined operator is read as arithmetic only when it is component-wise (<see cref="ComponentWiseOperators"/>).</summary>

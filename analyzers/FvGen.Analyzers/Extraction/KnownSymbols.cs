@@ -13,6 +13,7 @@ internal sealed class KnownSymbols
         ConservativeUpdate = conservativeUpdate;
         NumericalFlux = compilation.GetTypeByMetadataName("FvGen.NumericalFluxAttribute");
         FaceData = compilation.GetTypeByMetadataName("FvGen.FaceDataAttribute");
+        GeometryValue = compilation.GetTypeByMetadataName("FvGen.GeometryValueAttribute");
         BoundaryFlux = compilation.GetTypeByMetadataName("FvGen.BoundaryFluxAttribute");
         FaceField = compilation.GetTypeByMetadataName("FvGen.Fields.FaceField`1");
         CellField = compilation.GetTypeByMetadataName("FvGen.Fields.CellField`1");
@@ -30,6 +31,9 @@ internal sealed class KnownSymbols
     public INamedTypeSymbol? NumericalFlux { get; }
 
     public INamedTypeSymbol? FaceData { get; }
+
+    /// <summary><c>[GeometryValue]</c>: a type of geometry values, never a conserved state, with members that write nothing.</summary>
+    public INamedTypeSymbol? GeometryValue { get; }
 
     public INamedTypeSymbol? BoundaryFlux { get; }
 
@@ -94,6 +98,9 @@ internal sealed class KnownSymbols
 
         return false;
     }
+
+    /// <summary>True for a type marked <c>[GeometryValue]</c> (the runtime's <c>Vec3</c>, a team's own vector type).</summary>
+    public bool IsGeometryValue(ITypeSymbol? type) => type is INamedTypeSymbol named && HasAttribute(named.OriginalDefinition, GeometryValue);
 
     public bool IsSpan(ITypeSymbol? type) =>
         type is INamedTypeSymbol named

@@ -39,7 +39,7 @@ internal sealed record Purity(PurityKind Kind, string Reason, Location? Location
 /// Decides whether a flux or limiter writes state outside itself: assignments to fields, to
 /// elements of arrays it did not create, to <c>ref</c>/<c>out</c> parameters, or calls of methods
 /// that do. Source methods are read through their operations; metadata is trusted only for the
-/// math and span types of the framework and FvGen's own value types. Cached per compilation.
+/// math and span types of the framework and types marked [GeometryValue]. Cached per compilation.
 /// </summary>
 internal sealed class PurityChecker
 {
@@ -55,7 +55,11 @@ internal sealed class PurityChecker
     {
         _compilation = compilation;
         _syntaxFirst = syntaxFirst;
+        _geometryValue = compilation.GetTypeByMetadataName("FvGen.GeometryValueAttribute");
     }
+
+    /// <summary><c>[GeometryValue]</c>: compiled members of a type marked with it are trusted to write nothing.</summary>
+    private readonly INamedTypeSymbol? _geometryValue;
 
     public Purity Classify(IMethodSymbol method) => Classify(method, 0);
 
@@ -280,7 +284,7 @@ internal sealed class PurityChecker
                 or Microsoft.CodeAnalysis.CSharp.Syntax.ImplicitStackAllocArrayCreationExpressionSyntax,
         });
 
-    private static bool IsTrustedMetadata(IMethodSymbol method)
+    private bool IsTrustedMetadata(IMethodSymbol method)
     {
         var type = method.ContainingType;
         if (type is null)
@@ -299,6 +303,24 @@ internal sealed class PurityChecker
             return true;
         }
 
-        return ns == "FvGen.Geometry" || (ns == "FvGen.Fields" && method.MethodKind == MethodKind.PropertyGet);
+        return IsGeometryValue(type) || (ns == "FvGen.Fields" && method.MethodKind == MethodKind.PropertyGet);
+    }
+
+    private bool IsGeometryValue(INamedTypeSymbol type)
+    {
+        if (_geometryValue is null)
+        {
+            return false;
+        }
+
+        foreach (var attribute in type.OriginalDefinition.GetAttributes())
+        {
+            if (SymbolEqualityComparer.Default.Equals(attribute.AttributeClass, _geometryValue))
+            {
+                return true;
+            }
+        }
+
+        return false;
     }
 }

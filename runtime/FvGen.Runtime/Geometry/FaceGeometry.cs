@@ -10,4 +10,5 @@ namespace FvGen.Geometry;
 /// Distance between the two cell centroids along the normal (from the cell centroid to the face
 /// centroid on a boundary face); what a two-point diffusion flux divides by.
 /// </param>
+[GeometryValue]
 public readonly record struct FaceGeometry(Vec3 Normal, double Area, Vec3 Centroid, double CentreDistance);

@@ -3,6 +3,7 @@ using System.Globalization;
 namespace FvGen.Geometry;
 
 /// <summary>A point or vector in three dimensions. Two-dimensional meshes use <c>Z = 0</c>.</summary>
+[GeometryValue]
 public readonly record struct Vec3(double X, double Y, double Z)
 {
     /// <summary>The zero vector.</summary>
