@@ -143,46 +143,8 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     }
 
     /// <summary>The sum of two canonical linear parts by one ordered merge (zero sums dropped): still canonical.</summary>
-    private static ImmutableArray<KeyValuePair<string, SymPoly>> Merge(ImmutableArray<KeyValuePair<string, SymPoly>> a, ImmutableArray<KeyValuePair<string, SymPoly>> b)
-    {
-        var result = ImmutableArray.CreateBuilder<KeyValuePair<string, SymPoly>>(a.Length + b.Length);
-        int i = 0, j = 0;
-        while (i < a.Length && j < b.Length)
-        {
-            int order = string.CompareOrdinal(a[i].Key, b[j].Key);
-            if (order < 0)
-            {
-                result.Add(a[i++]);
-            }
-            else if (order > 0)
-            {
-                result.Add(b[j++]);
-            }
-            else
-            {
-                var sum = a[i].Value + b[j].Value;
-                if (!sum.IsZero)
-                {
-                    result.Add(new KeyValuePair<string, SymPoly>(a[i].Key, sum));
-                }
-
-                i++;
-                j++;
-            }
-        }
-
-        while (i < a.Length)
-        {
-            result.Add(a[i++]);
-        }
-
-        while (j < b.Length)
-        {
-            result.Add(b[j++]);
-        }
-
-        return result.Count == result.Capacity ? result.MoveToImmutable() : result.ToImmutable();
-    }
+    private static ImmutableArray<KeyValuePair<string, SymPoly>> Merge(ImmutableArray<KeyValuePair<string, SymPoly>> a, ImmutableArray<KeyValuePair<string, SymPoly>> b) =>
+        OrderedMerge.Sum(a, b, string.CompareOrdinal, static (x, y) => x + y, static v => v.IsZero);
 
     public bool Equals(AffineIndex? other) => other is not null && Key == other.Key;
 

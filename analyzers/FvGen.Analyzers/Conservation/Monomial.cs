@@ -43,45 +43,8 @@ internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
         }
 
         // Both lists are in ordinal order of their symbols: one ordered merge, zero powers dropped.
-        var x = a.Powers;
-        var y = b.Powers;
-        var merged = ImmutableArray.CreateBuilder<KeyValuePair<string, int>>(x.Length + y.Length);
-        int i = 0, j = 0;
-        while (i < x.Length && j < y.Length)
-        {
-            int order = string.CompareOrdinal(x[i].Key, y[j].Key);
-            if (order < 0)
-            {
-                merged.Add(x[i++]);
-            }
-            else if (order > 0)
-            {
-                merged.Add(y[j++]);
-            }
-            else
-            {
-                int power = x[i].Value + y[j].Value;
-                if (power != 0)
-                {
-                    merged.Add(new KeyValuePair<string, int>(x[i].Key, power));
-                }
-
-                i++;
-                j++;
-            }
-        }
-
-        while (i < x.Length)
-        {
-            merged.Add(x[i++]);
-        }
-
-        while (j < y.Length)
-        {
-            merged.Add(y[j++]);
-        }
-
-        return merged.Count == 0 ? One : new Monomial(merged.ToImmutable());
+        var merged = OrderedMerge.Sum(a.Powers, b.Powers, string.CompareOrdinal, static (x, y) => x + y, static p => p == 0);
+        return merged.IsEmpty ? One : new Monomial(merged);
     }
 
     public Monomial Reciprocal() =>

@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Generic;
 using System.Collections.Immutable;
 
@@ -26,25 +27,34 @@ internal static class ShiftedEquality
             return Expr(a[0], b[0], shift);
         }
 
-        // A multiset match: each factor of A pairs with one not yet taken in B.
+        return Multiset(a, b, shift, static (x, y, n) => y.ShapeKey != x.ShapeKey ? false : Expr(x, y, n));
+    }
+
+    /// <summary>
+    /// Each element of A pairs with one of B not yet taken for which <paramref name="equal"/> holds (in
+    /// order: equal elements are interchangeable, a shift being one-to-one); null as soon as a comparison
+    /// cannot decide.
+    /// </summary>
+    private static bool? Multiset<T>(ImmutableArray<T> a, ImmutableArray<T> b, IReadOnlyDictionary<string, long> shift, Func<T, T, IReadOnlyDictionary<string, long>, bool?> equal)
+    {
         var taken = new bool[b.Length];
         foreach (var x in a)
         {
             bool found = false;
             for (int k = 0; k < b.Length && !found; k++)
             {
-                if (taken[k] || b[k].ShapeKey != x.ShapeKey)
+                if (taken[k])
                 {
                     continue;
                 }
 
-                var equal = Expr(x, b[k], shift);
-                if (equal is null)
+                var same = equal(x, b[k], shift);
+                if (same is null)
                 {
                     return null;
                 }
 
-                if (equal.Value)
+                if (same.Value)
                 {
                     taken[k] = true;
                     found = true;
@@ -149,37 +159,7 @@ internal static class ShiftedEquality
             return true;
         }
 
-        var taken = new bool[b.Arguments.Length];
-        foreach (var x in a.Arguments)
-        {
-            bool found = false;
-            for (int k = 0; k < b.Arguments.Length && !found; k++)
-            {
-                if (taken[k])
-                {
-                    continue;
-                }
-
-                var equal = Sum(x, b.Arguments[k], shift);
-                if (equal is null)
-                {
-                    return null;
-                }
-
-                if (equal.Value)
-                {
-                    taken[k] = true;
-                    found = true;
-                }
-            }
-
-            if (!found)
-            {
-                return false;
-            }
-        }
-
-        return true;
+        return Multiset(a.Arguments, b.Arguments, shift, static (x, y, n) => Sum(x, y, n));
     }
 
     /// <summary>Sums as multisets of terms: equal coefficients, bodies equal after the shift.</summary>
@@ -190,37 +170,9 @@ internal static class ShiftedEquality
             return false;
         }
 
-        var taken = new bool[b.Terms.Length];
-        foreach (var x in a.Terms)
-        {
-            bool found = false;
-            for (int k = 0; k < b.Terms.Length && !found; k++)
-            {
-                var y = b.Terms[k];
-                if (taken[k] || y.Factors.Length != x.Factors.Length || y.BodyShapeKey != x.BodyShapeKey || !y.Coefficient.Equals(x.Coefficient))
-                {
-                    continue;
-                }
-
-                var equal = x.IsInvariant ? true : Factors(x.Factors, y.Factors, shift);
-                if (equal is null)
-                {
-                    return null;
-                }
-
-                if (equal.Value)
-                {
-                    taken[k] = true;
-                    found = true;
-                }
-            }
-
-            if (!found)
-            {
-                return false;
-            }
-        }
-
-        return true;
+        return Multiset(a.Terms, b.Terms, shift, static (x, y, n) =>
+            y.Factors.Length != x.Factors.Length || y.BodyShapeKey != x.BodyShapeKey || !y.Coefficient.Equals(x.Coefficient) ? false
+            : x.IsInvariant ? true
+            : Factors(x.Factors, y.Factors, n));
     }
 }

@@ -69,46 +69,8 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     /// The sum of two canonical term lists (monomial order, none zero) by one ordered merge: the same
     /// result as <see cref="Of"/> on their concatenation, without re-sorting.
     /// </summary>
-    private static SymPoly Merge(ImmutableArray<KeyValuePair<Monomial, Rational>> a, ImmutableArray<KeyValuePair<Monomial, Rational>> b)
-    {
-        var result = ImmutableArray.CreateBuilder<KeyValuePair<Monomial, Rational>>(a.Length + b.Length);
-        int i = 0, j = 0;
-        while (i < a.Length && j < b.Length)
-        {
-            int order = a[i].Key.CompareTo(b[j].Key);
-            if (order < 0)
-            {
-                result.Add(a[i++]);
-            }
-            else if (order > 0)
-            {
-                result.Add(b[j++]);
-            }
-            else
-            {
-                var value = a[i].Value + b[j].Value;
-                if (!value.IsZero)
-                {
-                    result.Add(new KeyValuePair<Monomial, Rational>(a[i].Key, value));
-                }
-
-                i++;
-                j++;
-            }
-        }
-
-        while (i < a.Length)
-        {
-            result.Add(a[i++]);
-        }
-
-        while (j < b.Length)
-        {
-            result.Add(b[j++]);
-        }
-
-        return new SymPoly(result.ToImmutable());
-    }
+    private static SymPoly Merge(ImmutableArray<KeyValuePair<Monomial, Rational>> a, ImmutableArray<KeyValuePair<Monomial, Rational>> b) =>
+        new(OrderedMerge.Sum(a, b, static (x, y) => x.CompareTo(y), static (x, y) => x + y, static v => v.IsZero));
 
     public static SymPoly operator -(SymPoly a) =>
         new(a.Terms.Select(t => new KeyValuePair<Monomial, Rational>(t.Key, -t.Value)).ToImmutableArray());

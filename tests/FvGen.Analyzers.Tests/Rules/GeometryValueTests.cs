@@ -25,36 +25,9 @@ public sealed class GeometryValueTests
         }
         """;
 
-    private const string Kernel = """
-        using TeamGeometry;
-
-        static class Slopes
-        {
-            static double Upwind(double a, double b) => a;
-
-            static double Extrapolate(double u, double slope, Point offset) => u + slope * offset.X;
-
-            [ConservativeUpdate]
-            public static void Rate(int[] left, int[] right, Point[] faceCentres, Point[] cellCentres, double[] u, double[] slope, double[] r)
-            {
-                for (int c = 1; c < u.Length - 1; c++)
-                {
-                    slope[c] = Math.Min(u[c + 1] - u[c], u[c] - u[c - 1]);
-                }
-
-                for (int f = 0; f < left.Length; f++)
-                {
-                    int l = left[f];
-                    int k = right[f];
-                    Point toLeft = faceCentres[f] - cellCentres[l];
-                    Point toRight = faceCentres[f] - cellCentres[k];
-                    double flux = Upwind(Extrapolate(u[l], slope[l], toLeft), Extrapolate(u[k], slope[k], toRight));
-                    r[l] -= flux;
-                    __RIGHT__
-                }
-            }
-        }
-        """;
+    /// <summary>The second-order face loop of <see cref="ReconstructedFaceLoopTests"/>, its offsets built from the library's points.</summary>
+    private static string Kernel(string right) =>
+        ReconstructedFaceLoopTests.Source(right: right).Replace("using FvGen.Geometry;", "using TeamGeometry;").Replace("Vec3", "Point");
 
     [Fact]
     public async Task MarkedLibraryVectorIsReadAsGeometry()
@@ -89,7 +62,7 @@ public sealed class GeometryValueTests
         using var image = new MemoryStream();
         var emitted = library.Emit(image);
         Assert.True(emitted.Success, string.Join("\n", emitted.Diagnostics));
-        var kernel = CSharpSyntaxTree.ParseText(TestReferences.Usings + Kernel.Replace("__RIGHT__", right), new CSharpParseOptions(LanguageVersion.Latest), path: "/0/Kernel.cs");
+        var kernel = CSharpSyntaxTree.ParseText(TestReferences.Usings + Kernel(right), new CSharpParseOptions(LanguageVersion.Latest), path: "/0/Kernel.cs");
         var compilation = CSharpCompilation.Create(
             "Kernel",
             [kernel],

@@ -42,7 +42,7 @@ public sealed class ReconstructedFaceLoopTests
         }
         """;
 
-    private static string Source(string slope = "slope[c] = Math.Min(u[c + 1] - u[c], u[c] - u[c - 1]);", string offset = "-", string right = "r[k] += flux;") =>
+    internal static string Source(string slope = "slope[c] = Math.Min(u[c + 1] - u[c], u[c] - u[c - 1]);", string offset = "-", string right = "r[k] += flux;") =>
         Kernel.Replace("__SLOPE__", slope).Replace("__OFFSET__", offset).Replace("__RIGHT__", right);
 
     public static TheoryData<string, string, string> Broken => new()
