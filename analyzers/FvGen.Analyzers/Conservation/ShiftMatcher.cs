@@ -353,41 +353,8 @@ internal static class ShiftMatcher
 
     private static ImmutableList<(AffineIndex, AffineIndex)>? MatchReads(ReadExpr x, ReadExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
     {
-        if (x.Array != y.Array || x.Path != y.Path || x.Subscripts.Length != y.Subscripts.Length)
-        {
-            return null;
-        }
-
-        for (int g = 0; g < x.Subscripts.Length; g++)
-        {
-            var gx = x.Subscripts[g];
-            var gy = y.Subscripts[g];
-            if (gx.Length != gy.Length)
-            {
-                return null;
-            }
-
-            for (int k = 0; k < gx.Length; k++)
-            {
-                switch (gx[k], gy[k])
-                {
-                    case (AffineSubscript ax, AffineSubscript ay):
-                        acc = acc.Add((ax.Index, ay.Index));
-                        break;
-                    case (MappedSubscript mx, MappedSubscript my) when mx.Map == my.Map && mx.Arguments.Length == my.Arguments.Length:
-                        for (int n = 0; n < mx.Arguments.Length; n++)
-                        {
-                            acc = acc.Add((mx.Arguments[n], my.Arguments[n]));
-                        }
-
-                        break;
-                    default:
-                        return null;
-                }
-            }
-        }
-
-        return acc;
+        var pairs = new List<(AffineIndex, AffineIndex)>();
+        return PairReads(x, y, pairs) ? acc.AddRange(pairs) : null;
     }
 
     private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchCall(
