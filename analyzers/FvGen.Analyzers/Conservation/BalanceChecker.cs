@@ -239,7 +239,8 @@ internal static class BalanceChecker
 
     /// <summary>Members at one position with opposite signs from different writes: given to a cell and taken back from it.</summary>
     private static bool GivenAndTakenBack(ShiftClass c) =>
-        c.Members.GroupBy(m => ShiftKey(m.Shift)).Any(g =>
+        c.Members.Count > 1 // a lone member has nothing to cancel against (most classes: the grouping is skipped)
+        && c.Members.GroupBy(m => ShiftKey(m.Shift)).Any(g =>
             g.Select(m => m.Source.Write).Distinct().Count() > 1
             && g.Any(m => m.Weight.LeadingSign > 0) && g.Any(m => m.Weight.LeadingSign < 0)
             && g.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight).IsZero);
@@ -827,6 +828,37 @@ internal static class BalanceChecker
         return string.Join("][", m.Source.Write.Subscripts.Select(g => string.Join(",", g.Select(s => s.Shift(back).Key))));
     }
 
-    private static string ShiftKey(ImmutableDictionary<string, long> shift) =>
-        string.Join(";", shift.Where(kv => kv.Value != 0).OrderBy(kv => kv.Key, StringComparer.Ordinal).Select(kv => kv.Key + "=" + kv.Value));
+    /// <summary>The non-zero moves in ordinal order of the variables, <c>i=1;j=-1</c>: equal texts, equal shifts.</summary>
+    private static string ShiftKey(ImmutableDictionary<string, long> shift)
+    {
+        var moves = new List<KeyValuePair<string, long>>(shift.Count);
+        foreach (var kv in shift)
+        {
+            if (kv.Value == 0)
+            {
+                continue;
+            }
+
+            int at = moves.Count;
+            while (at > 0 && string.CompareOrdinal(moves[at - 1].Key, kv.Key) > 0)
+            {
+                at--;
+            }
+
+            moves.Insert(at, kv);
+        }
+
+        if (moves.Count == 0)
+        {
+            return string.Empty;
+        }
+
+        var text = new System.Text.StringBuilder();
+        foreach (var move in moves)
+        {
+            text.Append(text.Length == 0 ? string.Empty : ";").Append(move.Key).Append('=').Append(move.Value.ToString(System.Globalization.CultureInfo.InvariantCulture));
+        }
+
+        return text.ToString();
+    }
 }

@@ -43,9 +43,18 @@ internal sealed class Term
             array = factors.ToArray();
         }
 
-        if (!IsSorted(array))
+        // An insertion sort: a body has one to a few factors.
+        for (int k = 1; k < array.Length; k++)
         {
-            Array.Sort(array, static (x, y) => string.CompareOrdinal(x.Key, y.Key));
+            var item = array[k];
+            int at = k;
+            while (at > 0 && string.CompareOrdinal(array[at - 1].Key, item.Key) > 0)
+            {
+                array[at] = array[at - 1];
+                at--;
+            }
+
+            array[at] = item;
         }
 
         var builder = ImmutableArray.CreateBuilder<Expr>(array.Length);
@@ -77,19 +86,6 @@ internal sealed class Term
     private string? _bodyShapeKey;
 
     private static bool IsSorted(ImmutableArray<Expr> factors)
-    {
-        for (int k = 1; k < factors.Length; k++)
-        {
-            if (string.CompareOrdinal(factors[k - 1].Key, factors[k].Key) > 0)
-            {
-                return false;
-            }
-        }
-
-        return true;
-    }
-
-    private static bool IsSorted(Expr[] factors)
     {
         for (int k = 1; k < factors.Length; k++)
         {
