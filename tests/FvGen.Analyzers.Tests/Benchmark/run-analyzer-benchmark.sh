@@ -108,6 +108,7 @@ analyzers=$(median < fvgen.txt)
 echo "--- medians of $R runs, $N kernels, $(nproc) cores, load average now $(cut -d' ' -f1-3 /proc/loadavg) ---"
 echo "build without analyzers: $without s"
 echo "build with analyzers:    $with s"
-echo "FvGen analyzer time:     $analyzers s ($(echo "scale=1; 100 * $analyzers / $with" | bc) % of the build with them)"
+spread() { sort -g "$1" | awk 'NR == 1 { lo = $1 } { hi = $1 } END { print lo "–" hi }'; }
+echo "FvGen analyzer time:     $analyzers s ($(echo "scale=1; 100 * $analyzers / $with" | bc) % of the build with them; runs $(spread fvgen.txt) s)"
 echo "build time added:        $(echo "scale=1; 100 * ($with - $without) / $without" | bc) % of the build without them"
 echo "files in $WORK"
