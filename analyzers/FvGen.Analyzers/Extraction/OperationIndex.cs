@@ -10,7 +10,12 @@ namespace FvGen.Analyzers.Extraction;
 /// (writes, reads, assigned locals, index maps, nested loops); each answer is a slice of this walk
 /// instead of another walk of the operation tree, which was a fifth of the checker's time.
 /// </summary>
-/// <remarks>The order is that of <see cref="OperationExtensions.Descendants(IOperation)"/>: a node, then its children in order.</remarks>
+/// <remarks>
+/// The order is that of <see cref="OperationExtensions.Descendants(IOperation)"/>: a node, then its
+/// children in order. Statements, loops and bodies are found by key; a node below them by a scan of
+/// the whole walk, so code that walks a small expression (the gather's per-face sums) keeps using
+/// Roslyn's own <c>Descendants()</c>.
+/// </remarks>
 internal sealed class OperationIndex
 {
     private readonly IOperation[] _nodes;
