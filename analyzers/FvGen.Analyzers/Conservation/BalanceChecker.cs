@@ -418,7 +418,7 @@ internal static class BalanceChecker
         bool leaves = weight.LeadingSign < 0;
         var (templateSign, template) = CSharpText.SignedProduct(-weight, "§");
         var props = ImmutableDictionary<string, string?>.Empty
-            .Add(FindingProperties.CounterpartShift, string.Join(";", shift.Where(kv => kv.Value != 0).Select(kv => kv.Key + "=" + kv.Value)))
+            .Add(FindingProperties.CounterpartShift, ShiftKey(shift))
             .Add(FindingProperties.CounterpartText, addend)
             .Add(FindingProperties.CounterpartTemplate, (templateSign < 0 ? "- " : "+ ") + template);
         if (rep.Term.Factors.Length == 1 && rep.Term.Origins.Length == 1)
@@ -828,7 +828,10 @@ internal static class BalanceChecker
         return string.Join("][", m.Source.Write.Subscripts.Select(g => string.Join(",", g.Select(s => s.Shift(back).Key))));
     }
 
-    /// <summary>The non-zero moves in ordinal order of the variables, <c>i=1;j=-1</c>: equal texts, equal shifts.</summary>
+    /// <summary>
+    /// The non-zero moves in ordinal order of the variables, <c>i=1;j=-1</c>, with invariant digits: equal
+    /// texts, equal shifts; the FVC0001 fix parses it back (LoopShift.Parse).
+    /// </summary>
     private static string ShiftKey(ImmutableDictionary<string, long> shift)
     {
         var moves = new List<KeyValuePair<string, long>>(shift.Count);

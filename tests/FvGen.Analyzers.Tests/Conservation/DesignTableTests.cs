@@ -48,6 +48,25 @@ public sealed class DesignTableTests
     }
 
     [Fact]
+    public void CounterpartShiftIsWrittenWithInvariantDigits()
+    {
+        // The FVC0001 fix parses the shift with the invariant culture; Swedish formats −1 with U+2212.
+        var culture = System.Globalization.CultureInfo.CurrentCulture;
+        try
+        {
+            System.Globalization.CultureInfo.CurrentCulture = new System.Globalization.CultureInfo("sv-SE");
+            var value = -Div(Read("Fx", At("i", 1), At("j")) - Read("Fx", At("i"), At("j")), Sym("dx"))
+                - Div(Read("Fy", At("i"), At("j", 1)), Sym("dy"));
+            var finding = Assert.Single(Check(IJ, Assign("R", Cell(At("i"), At("j")), value)));
+            Assert.Equal("j=-1", finding.Properties[FindingProperties.CounterpartShift]);
+        }
+        finally
+        {
+            System.Globalization.CultureInfo.CurrentCulture = culture;
+        }
+    }
+
+    [Fact]
     public void MismatchedFluxEvaluationsArePaired()
     {
         // R[i] = -(G(U[i],U[i+1]) - G(U[i],U[i-1])) / dx
