@@ -1,43 +1,41 @@
+using System;
 using System.Collections.Generic;
-using System.Linq;
 
 namespace FvGen.Analyzers.Conservation;
 
-/// <summary>Walks the factors of a term at any depth (inside call arguments and reciprocals).</summary>
+/// <summary>
+/// Walks the factors of a term at any depth (inside call arguments, reciprocals, opaque subscripts
+/// and gathered sums), in pre-order: a factor, then what is inside it. One walker serves both the
+/// full listing and the search for a first match, which stops early and allocates nothing (the
+/// balance asks it for every term).
+/// </summary>
 internal static class ExprTree
 {
-    public static IEnumerable<Expr> All(Term term) => term.Factors.SelectMany(All);
-
-    public static IEnumerable<Expr> All(Expr factor)
+    /// <summary>Every factor of the term at any depth, in pre-order.</summary>
+    public static IReadOnlyList<Expr> All(Term term)
     {
-        yield return factor;
-        var inner = factor switch
+        var all = new List<Expr>();
+        Find(term, all, static (e, list) =>
         {
-            CallExpr c => c.Arguments.SelectMany(a => a.Terms),
-            ReciprocalExpr r => r.Denominator.Terms,
-            OpaqueReadExpr q => q.Subscripts.SelectMany(g => g).SelectMany(s => s.Terms),
-            CellGatherExpr g => g.Left.Terms.Concat(g.Right.Terms),
-            _ => Enumerable.Empty<Term>(),
-        };
-        foreach (var t in inner)
-        {
-            foreach (var e in All(t))
-            {
-                yield return e;
-            }
-        }
+            list.Add(e);
+            return false;
+        });
+        return all;
     }
+
+    /// <summary>The first factor of type <typeparamref name="T"/> in pre-order, or null.</summary>
+    public static T? First<T>(Term term)
+        where T : Expr =>
+        Find<object?>(term, null, static (e, _) => e is T) as T;
 
     /// <summary>The first opaque read anywhere in the term, or null.</summary>
     public static OpaqueReadExpr? FirstOpaque(Term term) => First<OpaqueReadExpr>(term);
 
-    /// <summary>The first factor of type <typeparamref name="T"/> in the order of <see cref="All(Term)"/>, or null; walks without enumerators (the balance asks for every term).</summary>
-    public static T? First<T>(Term term)
-        where T : Expr
+    private static Expr? Find<TState>(Term term, TState state, Func<Expr, TState, bool> stop)
     {
         foreach (var f in term.Factors)
         {
-            if (First<T>(f) is { } found)
+            if (Find(f, state, stop) is { } found)
             {
                 return found;
             }
@@ -46,22 +44,19 @@ internal static class ExprTree
         return null;
     }
 
-    private static T? First<T>(Expr factor)
-        where T : Expr
+    private static Expr? Find<TState>(Expr factor, TState state, Func<Expr, TState, bool> stop)
     {
-        if (factor is T match)
+        if (stop(factor, state))
         {
-            return match;
+            return factor;
         }
 
         switch (factor)
         {
-            case ReadExpr:
-                return null;
             case CallExpr c:
                 foreach (var argument in c.Arguments)
                 {
-                    if (First<T>(argument) is { } inArgument)
+                    if (Find(argument, state, stop) is { } inArgument)
                     {
                         return inArgument;
                     }
@@ -69,13 +64,13 @@ internal static class ExprTree
 
                 return null;
             case ReciprocalExpr r:
-                return First<T>(r.Denominator);
+                return Find(r.Denominator, state, stop);
             case OpaqueReadExpr q:
                 foreach (var group in q.Subscripts)
                 {
                     foreach (var subscript in group)
                     {
-                        if (First<T>(subscript) is { } inSubscript)
+                        if (Find(subscript, state, stop) is { } inSubscript)
                         {
                             return inSubscript;
                         }
@@ -84,18 +79,17 @@ internal static class ExprTree
 
                 return null;
             case CellGatherExpr g:
-                return First<T>(g.Left) ?? First<T>(g.Right);
+                return Find(g.Left, state, stop) ?? Find(g.Right, state, stop);
             default:
                 return null;
         }
     }
 
-    private static T? First<T>(SumExpr sum)
-        where T : Expr
+    private static Expr? Find<TState>(SumExpr sum, TState state, Func<Expr, TState, bool> stop)
     {
         foreach (var t in sum.Terms)
         {
-            if (First<T>(t) is { } found)
+            if (Find(t, state, stop) is { } found)
             {
                 return found;
             }
