@@ -15,14 +15,15 @@ internal sealed record UpdateWrite(
     bool IsAssignment,
     int Origin)
 {
-    // Both keys are asked for in every pass of the balance: built once. A copy made with `with`
-    // carries them over, so only Value may change in such a copy (the only one made).
+    // The subscript key and the target's subscripts are asked for in every pass of the balance: built
+    // once. A copy made with `with` carries them over, so only Value may change in such a copy (the
+    // only one made).
 
     /// <summary>The subscripts' identity, <c>i,j</c> or <c>left[f]</c> (groups joined by <c>][</c>).</summary>
     public string SubscriptKey { get; } = KeyOf(Subscripts);
 
-    /// <summary>Identifies the target element (array, component and subscripts).</summary>
-    public string TargetKey { get; } = Array + "|" + Path + "|" + KeyOf(Subscripts);
+    /// <summary>Identifies the target element (array, component and subscripts); asked for rarely, so not kept.</summary>
+    public string TargetKey => Array + "|" + Path + "|" + SubscriptKey;
 
     /// <summary>The target's subscripts, group after group.</summary>
     public ImmutableArray<IndexTerm> AllSubscripts { get; } = Subscripts.SelectMany(g => g).ToImmutableArray();
