@@ -10,7 +10,7 @@ public sealed class RuleDocumentationTests
     private static readonly string RulesDirectory = Path.Combine(RepositoryRoot(), "docs", "rules");
 
     private static IReadOnlyList<Microsoft.CodeAnalysis.DiagnosticDescriptor> Descriptors() =>
-        typeof(ConservationRuleAnalyzer).Assembly.GetTypes()
+        typeof(ConservationAnalyzer).Assembly.GetTypes()
             .Where(t => !t.IsAbstract && typeof(DiagnosticAnalyzer).IsAssignableFrom(t) && t.GetCustomAttribute<DiagnosticAnalyzerAttribute>() is not null)
             .SelectMany(t => ((DiagnosticAnalyzer)Activator.CreateInstance(t)!).SupportedDiagnostics)
             .ToList();

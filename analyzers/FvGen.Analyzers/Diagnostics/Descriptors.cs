@@ -1,3 +1,4 @@
+using System.Collections.Immutable;
 using Microsoft.CodeAnalysis;
 
 namespace FvGen.Analyzers.Diagnostics;
@@ -26,6 +27,24 @@ internal static class Descriptors
     public static readonly DiagnosticDescriptor ImpureNumericalFlux = Create(DiagnosticIds.ImpureNumericalFlux, DiagnosticSeverity.Warning);
 
     public static readonly DiagnosticDescriptor NotAnalyzed = Create(DiagnosticIds.NotAnalyzed, DiagnosticSeverity.Info);
+
+    /// <summary>Every rule, in ID order: what the one conservation analyzer supports.</summary>
+    public static readonly ImmutableArray<DiagnosticDescriptor> All = ImmutableArray.Create(
+        DroppedFaceTerm, UnbalancedFaceTerm, MismatchedFluxEvaluations, OneSidedScatter, InPlaceSweep, ImpureNumericalFlux, NotAnalyzed);
+
+    /// <summary>The descriptor of a rule ID the engine decided.</summary>
+    public static DiagnosticDescriptor For(string id)
+    {
+        foreach (var d in All)
+        {
+            if (d.Id == id)
+            {
+                return d;
+            }
+        }
+
+        throw new System.ArgumentException("no FvGen rule has the ID " + id, nameof(id));
+    }
 
     /// <summary>The one factory: resources by ID, help link derived from the ID.</summary>
     private static DiagnosticDescriptor Create(string id, DiagnosticSeverity severity) =>

@@ -1,5 +1,4 @@
 using System;
-using System.Collections.Concurrent;
 using System.Collections.Generic;
 using System.Linq;
 using System.Runtime.CompilerServices;
@@ -10,14 +9,12 @@ using Microsoft.CodeAnalysis.Operations;
 namespace FvGen.Analyzers.Rules;
 
 /// <summary>
-/// Runs the checker once per method and compilation, whichever rule asks first; the rules then
-/// report their own share. Keeps one state per compilation (symbols, purity cache, results).
+/// The checker's state for one compilation (symbols and the purity cache), shared by the methods
+/// analyzed in it, and the run of the checker on one method body.
 /// </summary>
 internal sealed class ConservationAnalysis
 {
     private static readonly ConditionalWeakTable<Compilation, ConservationAnalysis> States = new();
-
-    private readonly ConcurrentDictionary<SyntaxNode, Lazy<IReadOnlyList<ConservationIssue>>> _results = new();
 
     private ConservationAnalysis(KnownSymbols known, Compilation compilation)
     {
@@ -41,13 +38,11 @@ internal sealed class ConservationAnalysis
         return known is null ? null : States.GetValue(compilation, c => new ConservationAnalysis(known, c));
     }
 
-    public IReadOnlyList<ConservationIssue> Issues(IMethodSymbol method, IOperation body) =>
-        _results.GetOrAdd(body.Syntax, _ => new Lazy<IReadOnlyList<ConservationIssue>>(() => Run(method, body))).Value;
-
     /// <summary>Prefix of the reason given when the checker itself fails; tests assert it never appears.</summary>
     public const string InternalErrorReason = "the checker hit an internal error";
 
-    private IReadOnlyList<ConservationIssue> Run(IMethodSymbol method, IOperation body)
+    /// <summary>What the checker finds in one method body, for every rule.</summary>
+    public IReadOnlyList<ConservationIssue> Issues(IMethodSymbol method, IOperation body)
     {
         var context = new MethodContext(Known, Purity, method.ContainingType, body);
         try

@@ -1,4 +1,4 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Rules.DroppedFaceTermAnalyzer>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.DroppedFaceTerm>;
 
 namespace FvGen.Analyzers.Tests.Rules;
 

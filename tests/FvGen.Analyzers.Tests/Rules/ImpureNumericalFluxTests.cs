@@ -1,4 +1,4 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Rules.ImpureNumericalFluxAnalyzer>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.ImpureNumericalFlux>;
 
 namespace FvGen.Analyzers.Tests.Rules;
 

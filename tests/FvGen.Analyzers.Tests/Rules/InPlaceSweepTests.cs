@@ -1,4 +1,4 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Rules.InPlaceSweepAnalyzer>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.InPlaceSweep>;
 
 namespace FvGen.Analyzers.Tests.Rules;
 

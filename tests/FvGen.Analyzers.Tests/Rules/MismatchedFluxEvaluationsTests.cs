@@ -1,4 +1,4 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Rules.MismatchedFluxEvaluationsAnalyzer>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.MismatchedFluxEvaluations>;
 
 namespace FvGen.Analyzers.Tests.Rules;
 

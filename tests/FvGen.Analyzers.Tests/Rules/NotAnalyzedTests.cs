@@ -1,4 +1,4 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Rules.NotAnalyzedAnalyzer>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.NotAnalyzed>;
 
 namespace FvGen.Analyzers.Tests.Rules;
 

@@ -7,8 +7,8 @@ using Microsoft.CodeAnalysis.Testing;
 namespace FvGen.Analyzers.Tests.Verifiers;
 
 /// <summary>Verifies one rule on a source with markup (<c>{|#0:…|}</c>).</summary>
-internal static class AnalyzerVerifier<TAnalyzer>
-    where TAnalyzer : DiagnosticAnalyzer, new()
+internal static class AnalyzerVerifier<TRule>
+    where TRule : IRuleUnderTest
 {
     public static DiagnosticResult Diagnostic(string id) => new DiagnosticResult(id, id == DiagnosticIds.NotAnalyzed ? DiagnosticSeverity.Info : DiagnosticSeverity.Warning);
 
@@ -17,11 +17,12 @@ internal static class AnalyzerVerifier<TAnalyzer>
 
     public static async Task VerifyAnalyzerAsync(string source, string? editorConfig, params DiagnosticResult[] expected)
     {
-        var test = new CSharpAnalyzerTest<TAnalyzer, DefaultVerifier>
+        var test = new CSharpAnalyzerTest<ConservationAnalyzer, DefaultVerifier>
         {
             TestCode = TestReferences.Usings + source,
             ReferenceAssemblies = TestReferences.Assemblies,
         };
+        test.DisabledDiagnostics.AddRange(AllRules.IdsOtherThan(TRule.Id));
         test.TestState.AdditionalReferences.AddRange(TestReferences.All);
         if (editorConfig is not null)
         {
@@ -33,17 +34,11 @@ internal static class AnalyzerVerifier<TAnalyzer>
     }
 }
 
-/// <summary>Runs every conservation rule at once (corpus and crash tests).</summary>
+/// <summary>The conservation analyzer, which reports every rule (corpus and crash tests), and its rule IDs.</summary>
 internal static class AllRules
 {
-    public static DiagnosticAnalyzer[] Analyzers() =>
-    [
-        new DroppedFaceTermAnalyzer(),
-        new UnbalancedFaceTermAnalyzer(),
-        new MismatchedFluxEvaluationsAnalyzer(),
-        new OneSidedScatterAnalyzer(),
-        new InPlaceSweepAnalyzer(),
-        new ImpureNumericalFluxAnalyzer(),
-        new NotAnalyzedAnalyzer(),
-    ];
+    public static DiagnosticAnalyzer[] Analyzers() => [new ConservationAnalyzer()];
+
+    public static IEnumerable<string> IdsOtherThan(string id) =>
+        new ConservationAnalyzer().SupportedDiagnostics.Select(d => d.Id).Where(other => other != id);
 }

@@ -6,21 +6,22 @@ using Microsoft.CodeAnalysis.Testing;
 namespace FvGen.Analyzers.Tests.Verifiers;
 
 /// <summary>Verifies a rule and its fix: diagnostics in the source, the fixed source, and optionally the fix-all result and which of several actions (by equivalence key).</summary>
-internal static class CodeFixVerifier<TAnalyzer, TCodeFix>
-    where TAnalyzer : DiagnosticAnalyzer, new()
+internal static class CodeFixVerifier<TRule, TCodeFix>
+    where TRule : IRuleUnderTest
     where TCodeFix : CodeFixProvider, new()
 {
-    public static DiagnosticResult Diagnostic(string id) => AnalyzerVerifier<TAnalyzer>.Diagnostic(id);
+    public static DiagnosticResult Diagnostic(string id) => AnalyzerVerifier<TRule>.Diagnostic(id);
 
     public static async Task VerifyCodeFixAsync(string source, DiagnosticResult[] expected, string fixedSource, string? batchFixedSource = null, DiagnosticResult[]? remaining = null, string? equivalenceKey = null)
     {
-        var test = new CSharpCodeFixTest<TAnalyzer, TCodeFix, DefaultVerifier>
+        var test = new CSharpCodeFixTest<FvGen.Analyzers.Rules.ConservationAnalyzer, TCodeFix, DefaultVerifier>
         {
             TestCode = TestReferences.Usings + source,
             FixedCode = TestReferences.Usings + fixedSource,
             ReferenceAssemblies = TestReferences.Assemblies,
             CodeActionEquivalenceKey = equivalenceKey,
         };
+        test.DisabledDiagnostics.AddRange(AllRules.IdsOtherThan(TRule.Id));
         if (batchFixedSource is not null)
         {
             test.BatchFixedCode = TestReferences.Usings + batchFixedSource;

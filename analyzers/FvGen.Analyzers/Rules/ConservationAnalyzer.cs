@@ -1,24 +1,25 @@
 using System.Collections.Immutable;
 using System.Linq;
+using FvGen.Analyzers.Diagnostics;
+using FvGen.Analyzers.Extraction;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.Diagnostics;
 
 namespace FvGen.Analyzers.Rules;
 
 /// <summary>
-/// Shared wiring of the rules: concurrent, generated code reported (FvGen's own output is checked
-/// too), symbols resolved at compilation start with an early return when FvGen is not referenced,
-/// then one operation-block action for methods in scope.
+/// The conservation rules FVC0001–FVC0006 and FVC0100 (<c>docs/rules/</c>), reported by one
+/// analyzer: they are views of one analysis of a method, and the compiler's per-symbol bookkeeping
+/// is paid once rather than once per rule. Concurrent; generated code is analyzed too (FvGen's own
+/// output is checked); symbols are resolved at compilation start, with nothing registered when
+/// FvGen is not referenced; operation trees are asked for only for methods in scope.
 /// </summary>
-public abstract class ConservationRuleAnalyzer : DiagnosticAnalyzer
+[DiagnosticAnalyzer(LanguageNames.CSharp)]
+public sealed class ConservationAnalyzer : DiagnosticAnalyzer
 {
-    private readonly DiagnosticDescriptor _rule;
+    public override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics => Descriptors.All;
 
-    private protected ConservationRuleAnalyzer(DiagnosticDescriptor rule) => _rule = rule;
-
-    public sealed override ImmutableArray<DiagnosticDescriptor> SupportedDiagnostics => ImmutableArray.Create(_rule);
-
-    public sealed override void Initialize(AnalysisContext context)
+    public override void Initialize(AnalysisContext context)
     {
         context.EnableConcurrentExecution();
         context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.Analyze | GeneratedCodeAnalysisFlags.ReportDiagnostics);
@@ -30,10 +31,7 @@ public abstract class ConservationRuleAnalyzer : DiagnosticAnalyzer
                 return;
             }
 
-            if (ChecksDeclarations)
-            {
-                start.RegisterSymbolAction(symbol => CheckDeclaration(symbol, analysis), SymbolKind.Method);
-            }
+            start.RegisterSymbolAction(symbol => DeclaredFluxPurity.Check(symbol, analysis), SymbolKind.Method);
 
             // Operation trees are asked for only inside scope: out-of-scope methods cost nothing.
             start.RegisterSymbolStartAction(
@@ -53,10 +51,10 @@ public abstract class ConservationRuleAnalyzer : DiagnosticAnalyzer
                             return;
                         }
 
-                        foreach (var issue in analysis.Issues(method, body).Where(i => i.RuleId == _rule.Id))
+                        foreach (var issue in analysis.Issues(method, body))
                         {
                             block.ReportDiagnostic(Diagnostic.Create(
-                                _rule,
+                                Descriptors.For(issue.RuleId),
                                 issue.Location,
                                 issue.AdditionalLocations,
                                 issue.Properties,
@@ -66,13 +64,5 @@ public abstract class ConservationRuleAnalyzer : DiagnosticAnalyzer
                 },
                 SymbolKind.Method);
         });
-    }
-
-    /// <summary>True for rules that also look at method declarations.</summary>
-    private protected virtual bool ChecksDeclarations => false;
-
-    /// <summary>The declaration check of such a rule.</summary>
-    private protected virtual void CheckDeclaration(SymbolAnalysisContext symbol, ConservationAnalysis analysis)
-    {
     }
 }

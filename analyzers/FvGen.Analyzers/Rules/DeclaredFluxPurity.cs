@@ -8,20 +8,12 @@ using Microsoft.CodeAnalysis.Diagnostics;
 namespace FvGen.Analyzers.Rules;
 
 /// <summary>
-/// FVC0006: see <c>docs/rules/FVC0006.md</c>. Reported at call sites of impure functions inside
-/// checked updates, and at every method declared <c>[NumericalFlux]</c> that writes outside itself.
+/// FVC0006 at the declaration: every method declared <c>[NumericalFlux]</c> that writes outside
+/// itself (call sites of impure functions inside checked updates are reported by the method analysis).
 /// </summary>
-[DiagnosticAnalyzer(LanguageNames.CSharp)]
-public sealed class ImpureNumericalFluxAnalyzer : ConservationRuleAnalyzer
+internal static class DeclaredFluxPurity
 {
-    public ImpureNumericalFluxAnalyzer()
-        : base(Descriptors.ImpureNumericalFlux)
-    {
-    }
-
-    private protected override bool ChecksDeclarations => true;
-
-    private protected override void CheckDeclaration(SymbolAnalysisContext symbol, ConservationAnalysis analysis)
+    public static void Check(SymbolAnalysisContext symbol, ConservationAnalysis analysis)
     {
         if (symbol.Symbol is not IMethodSymbol method || !analysis.Known.HasAttribute(method, analysis.Known.NumericalFlux))
         {
