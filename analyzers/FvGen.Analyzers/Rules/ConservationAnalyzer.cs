@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Immutable;
 using System.Linq;
 using FvGen.Analyzers.Diagnostics;
@@ -11,8 +12,8 @@ namespace FvGen.Analyzers.Rules;
 /// The conservation rules FVC0001–FVC0006 and FVC0100 (<c>docs/rules/</c>), reported by one
 /// analyzer: they are views of one analysis of a method, and the compiler's per-symbol bookkeeping
 /// is paid once rather than once per rule. Concurrent; generated code is analyzed too (FvGen's own
-/// output is checked); symbols are resolved at compilation start, with nothing registered when
-/// FvGen is not referenced; operation trees are asked for only for methods in scope.
+/// output is checked); symbols are resolved once per compilation, at its first method, and nothing
+/// is analyzed when FvGen is not referenced; operation trees are asked for only for methods in scope.
 /// </summary>
 [DiagnosticAnalyzer(LanguageNames.CSharp)]
 public sealed class ConservationAnalyzer : DiagnosticAnalyzer
@@ -25,19 +26,28 @@ public sealed class ConservationAnalyzer : DiagnosticAnalyzer
         context.ConfigureGeneratedCodeAnalysis(GeneratedCodeAnalysisFlags.Analyze | GeneratedCodeAnalysisFlags.ReportDiagnostics);
         context.RegisterCompilationStartAction(start =>
         {
-            var analysis = ConservationAnalysis.For(start.Compilation);
-            if (analysis is null)
-            {
-                return;
-            }
+            // The FvGen symbols are looked up at the first method, not here: the lookup binds the
+            // compilation's references, which the compiler does anyway once it declares symbols, and
+            // at compilation start the analyzer would be the one made to wait for it.
+            var compilation = start.Compilation;
+            var state = new Lazy<ConservationAnalysis?>(() => ConservationAnalysis.For(compilation));
 
-            start.RegisterSymbolAction(symbol => DeclaredFluxPurity.Check(symbol, analysis), SymbolKind.Method);
+            start.RegisterSymbolAction(
+                symbol =>
+                {
+                    if (state.Value is { } analysis)
+                    {
+                        DeclaredFluxPurity.Check(symbol, analysis);
+                    }
+                },
+                SymbolKind.Method);
 
             // Operation trees are asked for only inside scope: out-of-scope methods cost nothing.
             start.RegisterSymbolStartAction(
                 symbolStart =>
                 {
-                    if (symbolStart.Symbol is not IMethodSymbol candidate
+                    if (state.Value is not { } analysis
+                        || symbolStart.Symbol is not IMethodSymbol candidate
                         || candidate.Locations.FirstOrDefault(l => l.IsInSource)?.SourceTree is not { } tree
                         || !ConservationScope.IsInScope(candidate, analysis.Known, symbolStart.Options, tree))
                     {
