@@ -547,7 +547,7 @@ internal static class BalanceChecker
     /// when it sits at the cell (a face array staggered at the low face). With no offset anywhere the
     /// variable is one no other class of the write differences along.
     /// </summary>
-    private static (ImmutableDictionary<string, long> Shift, string Variable) CounterpartShift(AttributedTerm term, List<ShiftClass> all, LoopSpace space)
+    private static (IReadOnlyDictionary<string, long> Shift, string Variable) CounterpartShift(AttributedTerm term, List<ShiftClass> all, LoopSpace space)
     {
         var lattice = space.Variables.Where(v => v.Kind == LoopVariableKind.Lattice).ToList();
         var target = term.Write.Subscripts.SelectMany(g => g).SelectMany(s => s.AffineParts).ToList();
@@ -597,7 +597,7 @@ internal static class BalanceChecker
             ?? lattice.FirstOrDefault(v => used.Contains(v.Name))
             ?? lattice.FirstOrDefault();
         return free is null
-            ? (ImmutableDictionary<string, long>.Empty, "?")
+            ? (ShiftMatcher.NoShift, "?")
             : (Unit(lattice, free.Name, step[free.Name]), free.Name);
     }
 
@@ -623,8 +623,8 @@ internal static class BalanceChecker
         return best;
     }
 
-    private static ImmutableDictionary<string, long> Unit(List<LoopVariable> lattice, string variable, long value) =>
-        lattice.ToImmutableDictionary(v => v.Name, v => v.Name == variable ? value : 0L, StringComparer.Ordinal);
+    private static IReadOnlyDictionary<string, long> Unit(List<LoopVariable> lattice, string variable, long value) =>
+        lattice.ToDictionary(v => v.Name, v => v.Name == variable ? value : 0L, StringComparer.Ordinal);
 
     /// <summary>Two lone classes are one face seen twice when both bodies are evaluations (a call or a product), not plain reads.</summary>
     private static bool Similar(ShiftClass a, ShiftClass b)
@@ -832,7 +832,7 @@ internal static class BalanceChecker
     /// The non-zero moves in ordinal order of the variables, <c>i=1;j=-1</c>, with invariant digits: equal
     /// texts, equal shifts; the FVC0001 fix parses it back (LoopShift.Parse).
     /// </summary>
-    private static string ShiftKey(ImmutableDictionary<string, long> shift)
+    private static string ShiftKey(IReadOnlyDictionary<string, long> shift)
     {
         var moves = new List<KeyValuePair<string, long>>(shift.Count);
         foreach (var kv in shift)

@@ -9,7 +9,7 @@ namespace FvGen.Analyzers.Conservation;
 internal sealed record AttributedTerm(Term Term, UpdateWrite Write);
 
 /// <summary>A member of a shift class: its term, the shift from the representative, and the sign of the match.</summary>
-internal sealed record ClassMember(AttributedTerm Source, ImmutableDictionary<string, long> Shift, int Sign)
+internal sealed record ClassMember(AttributedTerm Source, IReadOnlyDictionary<string, long> Shift, int Sign)
 {
     /// <summary>The coefficient this member adds to the class sum.</summary>
     public SymPoly Weight => Sign > 0 ? Source.Term.Coefficient : -Source.Term.Coefficient;
@@ -34,7 +34,7 @@ internal sealed class ShiftClass
     {
         var classes = new List<ShiftClass>();
         var byShape = new Dictionary<string, List<ShiftClass>>(StringComparer.Ordinal);
-        var empty = ImmutableDictionary<string, long>.Empty;
+        var empty = ShiftMatcher.NoShift;
         foreach (var t in terms)
         {
             bool placed = false;

@@ -17,8 +17,15 @@ internal static class ShiftMatcher
     /// <summary>Upper bound on alignments tried for one pair of bodies (products and symmetric calls permute).</summary>
     private const int MaxAlignments = 4096;
 
+    /// <summary>
+    /// The shift that moves nothing. Shifts are read-only maps from loop variable to move; plain
+    /// dictionaries rather than immutable ones, whose generic code over a value type the JIT would
+    /// compile afresh in every short-lived compiler process.
+    /// </summary>
+    public static readonly IReadOnlyDictionary<string, long> NoShift = new Dictionary<string, long>(StringComparer.Ordinal);
+
     /// <summary>A found shift: body B equals <see cref="Sign"/> times body A at iteration <c>i + Shift</c>.</summary>
-    public sealed record Match(ImmutableDictionary<string, long> Shift, int Sign);
+    public sealed record Match(IReadOnlyDictionary<string, long> Shift, int Sign);
 
     /// <summary>Finds how <paramref name="b"/> is a shifted copy of <paramref name="a"/>, or null.</summary>
     public static Match? TryMatch(Term a, Term b, LoopSpace space)
@@ -35,14 +42,14 @@ internal static class ShiftMatcher
         }
 
         int tried = 0;
-        foreach (var (pairs, sign) in MatchFactors(a.Factors, b.Factors, ImmutableList<(AffineIndex, AffineIndex)>.Empty, 1))
+        foreach (var (pairs, sign) in MatchFactors(a.Factors, b.Factors, IndexPairChain.Empty, 1))
         {
             if (++tried > MaxAlignments)
             {
                 return null;
             }
 
-            var shift = Solve(pairs, space);
+            var shift = Solve(pairs.ToArray(), space);
             if (shift is not null)
             {
                 return new Match(shift, sign);
@@ -62,7 +69,7 @@ internal static class ShiftMatcher
         var first = a.Reads.FirstOrDefault();
         if (first is null)
         {
-            return a.BodyKey == b.BodyKey ? new Match(ImmutableDictionary<string, long>.Empty, 1) : null;
+            return a.BodyKey == b.BodyKey ? new Match(ShiftMatcher.NoShift, 1) : null;
         }
 
         // Many reads of B share A's first read's shape (u[•] in a limiter); each distinct shift is tried once.
@@ -97,7 +104,7 @@ internal static class ShiftMatcher
     };
 
     /// <summary>The integer shift vector that maps every first index of a pair onto its second, or null.</summary>
-    public static ImmutableDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    public static IReadOnlyDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
     {
         if (AllConstant(pairs))
         {
@@ -163,7 +170,7 @@ internal static class ShiftMatcher
     }
 
     /// <summary>The shift named by a solution (each unknown counts steps of its variable), or null when there is none or it is not integral.</summary>
-    private static ImmutableDictionary<string, long>? ToShift(Rational[]? x, IReadOnlyList<LoopVariable> unknowns)
+    private static IReadOnlyDictionary<string, long>? ToShift(Rational[]? x, IReadOnlyList<LoopVariable> unknowns)
     {
         if (x is null)
         {
@@ -178,17 +185,17 @@ internal static class ShiftMatcher
             }
         }
 
-        var result = ImmutableDictionary.CreateBuilder<string, long>(StringComparer.Ordinal);
+        var result = new Dictionary<string, long>(unknowns.Count, StringComparer.Ordinal);
         for (int k = 0; k < unknowns.Count; k++)
         {
             result[unknowns[k].Name] = (long)x[k].Numerator * unknowns[k].Step;
         }
 
-        return result.ToImmutable();
+        return result;
     }
 
     /// <summary>The same system when no index carries a symbol (the common case): one row per pair.</summary>
-    private static ImmutableDictionary<string, long>? SolveConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    private static IReadOnlyDictionary<string, long>? SolveConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
     {
         var unknowns = space.LatticeVariables;
         var rows = new List<Rational[]>(pairs.Count);
@@ -246,8 +253,8 @@ internal static class ShiftMatcher
         return Rational.Zero;
     }
 
-    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchFactors(
-        ImmutableArray<Expr> a, ImmutableArray<Expr> b, ImmutableList<(AffineIndex, AffineIndex)> acc, int sign)
+    private static IEnumerable<(IndexPairChain Pairs, int Sign)> MatchFactors(
+        ImmutableArray<Expr> a, ImmutableArray<Expr> b, IndexPairChain acc, int sign)
     {
         if (a.IsEmpty)
         {
@@ -279,8 +286,8 @@ internal static class ShiftMatcher
         }
     }
 
-    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchExpr(
-        Expr x, Expr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    private static IEnumerable<(IndexPairChain Pairs, int Sign)> MatchExpr(
+        Expr x, Expr y, IndexPairChain acc)
     {
         switch (x, y)
         {
@@ -351,14 +358,14 @@ internal static class ShiftMatcher
         return true;
     }
 
-    private static ImmutableList<(AffineIndex, AffineIndex)>? MatchReads(ReadExpr x, ReadExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    private static IndexPairChain? MatchReads(ReadExpr x, ReadExpr y, IndexPairChain acc)
     {
         var pairs = new List<(AffineIndex, AffineIndex)>();
-        return PairReads(x, y, pairs) ? acc.AddRange(pairs) : null;
+        return PairReads(x, y, pairs) ? acc.Extend(pairs) : null;
     }
 
-    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchCall(
-        CallExpr x, CallExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    private static IEnumerable<(IndexPairChain Pairs, int Sign)> MatchCall(
+        CallExpr x, CallExpr y, IndexPairChain acc)
     {
         int n = x.Arguments.Length;
         IEnumerable<(int[] Order, int[] ArgumentSigns, int Sign)> orders = x.Symmetry switch
@@ -381,8 +388,8 @@ internal static class ShiftMatcher
         }
     }
 
-    private static IEnumerable<ImmutableList<(AffineIndex, AffineIndex)>> MatchArguments(
-        CallExpr x, CallExpr y, int[] order, int[] argumentSigns, int k, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    private static IEnumerable<IndexPairChain> MatchArguments(
+        CallExpr x, CallExpr y, int[] order, int[] argumentSigns, int k, IndexPairChain acc)
     {
         if (k == order.Length)
         {
@@ -403,8 +410,8 @@ internal static class ShiftMatcher
     }
 
     /// <summary>Matches two sums term by term; the sign says whether <c>y = x</c> or <c>y = −x</c>.</summary>
-    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchSum(
-        SumExpr x, SumExpr y, ImmutableList<(AffineIndex, AffineIndex)> acc)
+    private static IEnumerable<(IndexPairChain Pairs, int Sign)> MatchSum(
+        SumExpr x, SumExpr y, IndexPairChain acc)
     {
         if (x.Terms.Length != y.Terms.Length)
         {
@@ -417,8 +424,8 @@ internal static class ShiftMatcher
         }
     }
 
-    private static IEnumerable<(ImmutableList<(AffineIndex, AffineIndex)> Pairs, int Sign)> MatchTerms(
-        ImmutableArray<Term> x, ImmutableArray<Term> y, ImmutableList<(AffineIndex, AffineIndex)> acc, int sign)
+    private static IEnumerable<(IndexPairChain Pairs, int Sign)> MatchTerms(
+        ImmutableArray<Term> x, ImmutableArray<Term> y, IndexPairChain acc, int sign)
     {
         if (x.IsEmpty)
         {

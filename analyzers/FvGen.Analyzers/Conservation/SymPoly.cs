@@ -1,7 +1,6 @@
 using System;
 using System.Collections.Generic;
 using System.Collections.Immutable;
-using System.Linq;
 using System.Text;
 
 namespace FvGen.Analyzers.Conservation;
@@ -19,7 +18,18 @@ internal sealed class SymPoly : IEquatable<SymPoly>
 
     private SymPoly(ImmutableArray<KeyValuePair<Monomial, Rational>> terms) => Terms = terms;
 
-    private string Key => _key ??= string.Join(" + ", Terms.Select(t => t.Value + "*" + t.Key.Key));
+    private string Key => _key ??= BuildKey();
+
+    private string BuildKey()
+    {
+        var text = new StringBuilder();
+        foreach (var t in Terms)
+        {
+            text.Append(text.Length == 0 ? string.Empty : " + ").Append(t.Value.ToString()).Append('*').Append(t.Key.Key);
+        }
+
+        return text.ToString();
+    }
 
     public static SymPoly Zero { get; } = new(ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty);
 
@@ -35,7 +45,21 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     /// <summary>True when the value is a plain rational number (no symbols).</summary>
     public bool IsConstant => Terms.IsEmpty || (Terms.Length == 1 && Terms[0].Key.IsOne);
 
-    public Rational ConstantValue => Terms.IsEmpty ? Rational.Zero : Terms.Where(t => t.Key.IsOne).Select(t => t.Value).FirstOrDefault();
+    public Rational ConstantValue
+    {
+        get
+        {
+            foreach (var t in Terms)
+            {
+                if (t.Key.IsOne)
+                {
+                    return t.Value;
+                }
+            }
+
+            return Rational.Zero;
+        }
+    }
 
     public bool IsMonomial => Terms.Length == 1;
 
@@ -54,13 +78,64 @@ internal sealed class SymPoly : IEquatable<SymPoly>
             return new SymPoly(single[0].Value.IsZero ? ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty : ImmutableArray.Create(single[0]));
         }
 
-        var sum = new SortedDictionary<Monomial, Rational>();
+        var list = new List<KeyValuePair<Monomial, Rational>>();
         foreach (var t in terms)
         {
-            sum[t.Key] = sum.TryGetValue(t.Key, out var current) ? current + t.Value : t.Value;
+            list.Add(t);
         }
 
-        return new SymPoly(sum.Where(t => !t.Value.IsZero).ToImmutableArray());
+        return Normalized(list);
+    }
+
+    /// <summary>
+    /// Terms put in monomial order with equal monomials added and zeros dropped. An insertion sort
+    /// with loops of our own: a coefficient has a few terms, and the framework's sorted collections
+    /// over this value-type pair would be compiled by the JIT in every compiler process.
+    /// </summary>
+    private static SymPoly Normalized(List<KeyValuePair<Monomial, Rational>> terms)
+    {
+        for (int k = 1; k < terms.Count; k++)
+        {
+            var item = terms[k];
+            int at = k;
+            while (at > 0 && terms[at - 1].Key.CompareTo(item.Key) > 0)
+            {
+                terms[at] = terms[at - 1];
+                at--;
+            }
+
+            terms[at] = item;
+        }
+
+        var result = ImmutableArray.CreateBuilder<KeyValuePair<Monomial, Rational>>(terms.Count);
+        for (int k = 0; k < terms.Count;)
+        {
+            var monomial = terms[k].Key;
+            var value = terms[k].Value;
+            for (k++; k < terms.Count && terms[k].Key.CompareTo(monomial) == 0; k++)
+            {
+                value += terms[k].Value;
+            }
+
+            if (!value.IsZero)
+            {
+                result.Add(new KeyValuePair<Monomial, Rational>(monomial, value));
+            }
+        }
+
+        return new SymPoly(result.Count == result.Capacity ? result.MoveToImmutable() : result.ToImmutable());
+    }
+
+    /// <summary>Each term's value changed by <paramref name="map"/> (never to zero: negation and non-zero scaling).</summary>
+    private SymPoly MapValues(Func<Rational, Rational> map)
+    {
+        var result = ImmutableArray.CreateBuilder<KeyValuePair<Monomial, Rational>>(Terms.Length);
+        foreach (var t in Terms)
+        {
+            result.Add(new KeyValuePair<Monomial, Rational>(t.Key, map(t.Value)));
+        }
+
+        return new SymPoly(result.MoveToImmutable());
     }
 
     public static SymPoly operator +(SymPoly a, SymPoly b) => a.IsZero ? b : b.IsZero ? a : Merge(a.Terms, b.Terms);
@@ -72,8 +147,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     private static SymPoly Merge(ImmutableArray<KeyValuePair<Monomial, Rational>> a, ImmutableArray<KeyValuePair<Monomial, Rational>> b) =>
         new(OrderedMerge.Sum(a, b, static (x, y) => x.CompareTo(y), static (x, y) => x + y, static v => v.IsZero));
 
-    public static SymPoly operator -(SymPoly a) =>
-        new(a.Terms.Select(t => new KeyValuePair<Monomial, Rational>(t.Key, -t.Value)).ToImmutableArray());
+    public static SymPoly operator -(SymPoly a) => a.MapValues(static v => -v);
 
     public static SymPoly operator -(SymPoly a, SymPoly b) => a + (-b);
 
@@ -99,11 +173,19 @@ internal sealed class SymPoly : IEquatable<SymPoly>
             return Of(new[] { new KeyValuePair<Monomial, Rational>(a.Terms[0].Key * b.Terms[0].Key, a.Terms[0].Value * b.Terms[0].Value) });
         }
 
-        return Of(a.Terms.SelectMany(x => b.Terms.Select(y => new KeyValuePair<Monomial, Rational>(x.Key * y.Key, x.Value * y.Value))));
+        var products = new List<KeyValuePair<Monomial, Rational>>(a.Terms.Length * b.Terms.Length);
+        foreach (var x in a.Terms)
+        {
+            foreach (var y in b.Terms)
+            {
+                products.Add(new KeyValuePair<Monomial, Rational>(x.Key * y.Key, x.Value * y.Value));
+            }
+        }
+
+        return Normalized(products);
     }
 
-    public static SymPoly operator *(SymPoly a, Rational r) =>
-        r.IsZero ? Zero : new(a.Terms.Select(t => new KeyValuePair<Monomial, Rational>(t.Key, t.Value * r)).ToImmutableArray());
+    public static SymPoly operator *(SymPoly a, Rational r) => r.IsZero ? Zero : r.IsOne ? a : a.MapValues(v => v * r);
 
     /// <summary>The reciprocal of a single monomial; null for a sum (which stays an opaque symbol).</summary>
     public SymPoly? TryReciprocal()

@@ -389,7 +389,7 @@ internal sealed partial class LoopNestReader
                 }
 
                 break;
-            case IInvocationOperation invocation when invocation.TargetMethod.ContainingType?.ToDisplayString() == "System.Diagnostics.Debug":
+            case IInvocationOperation invocation when SymbolNames.IsType(invocation.TargetMethod.ContainingType, "System.Diagnostics", "Debug"):
                 return;
             case IInvocationOperation invocation when invocation.Arguments.Any(a => a.Parameter?.RefKind == RefKind.Out):
                 ReadOutCall(invocation);

@@ -279,8 +279,9 @@ internal static class MethodReader
     /// <summary>A read-only list type with an integer indexer (<c>IReadOnlyList&lt;BoundaryPatch&gt;</c>), not an array or span.</summary>
     private static bool IsIndexedTable(ITypeSymbol type) =>
         type is INamedTypeSymbol { TypeKind: TypeKind.Interface or TypeKind.Class } named
-        && named.OriginalDefinition.ToDisplayString() is "System.Collections.Generic.IReadOnlyList<T>" or "System.Collections.Generic.IList<T>" or "System.Collections.Generic.List<T>"
-            or "System.Collections.ObjectModel.ReadOnlyCollection<T>";
+        && named.Arity == 1
+        && (named.Name is "IReadOnlyList" or "IList" or "List" && SymbolNames.IsType(named, "System.Collections.Generic", named.Name, 1)
+            || SymbolNames.IsType(named, "System.Collections.ObjectModel", "ReadOnlyCollection", 1));
 
     /// <summary>
     /// A loop is a definition (it fills face data) when every array it writes is assigned, not

@@ -292,18 +292,19 @@ internal sealed class PurityChecker
             return false;
         }
 
-        string ns = type.ContainingNamespace?.ToDisplayString() ?? string.Empty;
-        if (ns == "System" && type.Name is "Math" or "MathF" or "Double" or "Single" or "Int32" or "Int64" or "Span" or "ReadOnlySpan" or "MemoryExtensions")
+        var ns = type.ContainingNamespace;
+        if (type.Name is "Math" or "MathF" or "Double" or "Single" or "Int32" or "Int64" or "Span" or "ReadOnlySpan" or "MemoryExtensions"
+            && SymbolNames.IsNamespace(ns, "System"))
         {
             return true;
         }
 
-        if (ns.StartsWith("System.Numerics", System.StringComparison.Ordinal))
+        if (SymbolNames.IsWithinNamespace(ns, "System.Numerics"))
         {
             return true;
         }
 
-        return IsGeometryValue(type) || (ns == "FvGen.Fields" && method.MethodKind == MethodKind.PropertyGet);
+        return IsGeometryValue(type) || (method.MethodKind == MethodKind.PropertyGet && SymbolNames.IsNamespace(ns, "FvGen.Fields"));
     }
 
     private bool IsGeometryValue(INamedTypeSymbol type)

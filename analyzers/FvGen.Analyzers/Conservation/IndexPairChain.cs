@@ -1,0 +1,52 @@
+using System.Collections.Generic;
+
+namespace FvGen.Analyzers.Conservation;
+
+/// <summary>
+/// The index pairs an alignment search has collected so far, as a persistent chain: each branch of
+/// the search extends its parent's chain without copying it, and backtracking just drops the
+/// extension. <see cref="Empty"/> holds no pair.
+/// </summary>
+internal sealed class IndexPairChain
+{
+    private readonly AffineIndex? _a;
+    private readonly AffineIndex? _b;
+    private readonly IndexPairChain? _rest;
+
+    private IndexPairChain(AffineIndex? a, AffineIndex? b, IndexPairChain? rest, int count)
+    {
+        _a = a;
+        _b = b;
+        _rest = rest;
+        Count = count;
+    }
+
+    public static IndexPairChain Empty { get; } = new(null, null, null, 0);
+
+    public int Count { get; }
+
+    /// <summary>This chain followed by <paramref name="pairs"/>, in their order.</summary>
+    public IndexPairChain Extend(List<(AffineIndex, AffineIndex)> pairs)
+    {
+        var chain = this;
+        foreach (var (a, b) in pairs)
+        {
+            chain = new IndexPairChain(a, b, chain, chain.Count + 1);
+        }
+
+        return chain;
+    }
+
+    /// <summary>The pairs in the order they were added.</summary>
+    public (AffineIndex A, AffineIndex B)[] ToArray()
+    {
+        var result = new (AffineIndex A, AffineIndex B)[Count];
+        int k = Count;
+        for (var link = this; link.Count > 0; link = link._rest!)
+        {
+            result[--k] = (link._a!, link._b!);
+        }
+
+        return result;
+    }
+}
