@@ -1,5 +1,5 @@
 using Microsoft.CodeAnalysis.Testing;
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.Tests.Verifiers.DroppedFaceTerm, FvGen.Analyzers.CodeFixes.DroppedFaceTermFix>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.CodeFixes.DroppedFaceTermFix>;
 
 namespace FvGen.Analyzers.Tests.CodeFixes;
 

@@ -2,7 +2,7 @@ using FvGen.Analyzers.CodeFixes;
 using FvGen.Analyzers.Tests.Harness;
 using FvGen.Analyzers.Tests.Verifiers;
 using Microsoft.CodeAnalysis.Testing;
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.Tests.Verifiers.InPlaceSweep, FvGen.Analyzers.CodeFixes.InPlaceSweepFix>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.CodeFixes.InPlaceSweepFix>;
 
 namespace FvGen.Analyzers.Tests.CodeFixes;
 

@@ -1,5 +1,5 @@
 using Microsoft.CodeAnalysis.Testing;
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.Tests.Verifiers.OneSidedScatter, FvGen.Analyzers.CodeFixes.OneSidedScatterFix>;
+using VerifyCS = FvGen.Analyzers.Tests.Verifiers.CodeFixVerifier<FvGen.Analyzers.CodeFixes.OneSidedScatterFix>;
 
 namespace FvGen.Analyzers.Tests.CodeFixes;
 

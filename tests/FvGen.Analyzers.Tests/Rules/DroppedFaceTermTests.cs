@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.DroppedFaceTerm>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class DroppedFaceTermTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.DroppedFaceTerm);
+
     [Fact]
     public Task TwoDimensionalRateMissingTheLowYFace() =>
         VerifyCS.VerifyAnalyzerAsync(

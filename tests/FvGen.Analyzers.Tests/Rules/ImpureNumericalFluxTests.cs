@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.ImpureNumericalFlux>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class ImpureNumericalFluxTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.ImpureNumericalFlux);
+
     [Fact]
     public Task DeclaredFluxWritingAStaticField() =>
         VerifyCS.VerifyAnalyzerAsync(

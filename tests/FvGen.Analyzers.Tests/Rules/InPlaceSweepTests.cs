@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.InPlaceSweep>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class InPlaceSweepTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.InPlaceSweep);
+
     [Fact]
     public Task UpwindStepOverwritingItsInput() =>
         VerifyCS.VerifyAnalyzerAsync(

@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.MismatchedFluxEvaluations>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class MismatchedFluxEvaluationsTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.MismatchedFluxEvaluations);
+
     private const string Flux = """
         static double G(double a, double b) => 0.25 * (a * a + b * b) - 0.5 * Math.Max(Math.Abs(a), Math.Abs(b)) * (b - a);
         """;

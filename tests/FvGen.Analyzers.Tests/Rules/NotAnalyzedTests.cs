@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.NotAnalyzed>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class NotAnalyzedTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.NotAnalyzed);
+
     [Fact]
     public Task WriteUnderAConditionIsNotGuessed() =>
         VerifyCS.VerifyAnalyzerAsync(

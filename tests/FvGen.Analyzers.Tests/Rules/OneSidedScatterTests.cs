@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.OneSidedScatter>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class OneSidedScatterTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.OneSidedScatter);
+
     [Fact]
     public Task FaceFluxGivenToTheOwnerOnly() =>
         VerifyCS.VerifyAnalyzerAsync(

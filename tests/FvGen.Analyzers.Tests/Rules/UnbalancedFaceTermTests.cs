@@ -1,9 +1,11 @@
-using VerifyCS = FvGen.Analyzers.Tests.Verifiers.AnalyzerVerifier<FvGen.Analyzers.Tests.Verifiers.UnbalancedFaceTerm>;
+using FvGen.Analyzers.Tests.Verifiers;
 
 namespace FvGen.Analyzers.Tests.Rules;
 
 public sealed class UnbalancedFaceTermTests
 {
+    private static readonly AnalyzerVerifier VerifyCS = new(DiagnosticIds.UnbalancedFaceTerm);
+
     [Fact]
     public Task SignSlipNamesTheWeightsAndTheFix() =>
         VerifyCS.VerifyAnalyzerAsync(
