@@ -1,3 +1,4 @@
+using System;
 using System.Collections.Immutable;
 using System.Linq;
 
@@ -26,14 +27,51 @@ internal sealed record UpdateWrite(
     public string TargetKey => Array + "|" + Path + "|" + SubscriptKey;
 
     /// <summary>The target's subscripts, group after group.</summary>
-    public ImmutableArray<IndexTerm> AllSubscripts { get; } = Subscripts.SelectMany(g => g).ToImmutableArray();
+    public ImmutableArray<IndexTerm> AllSubscripts { get; } = ImmutableArray.Create(ReadExpr.Flatten(Subscripts));
 
     /// <summary>The distinct keys of <see cref="AllSubscripts"/> (one to three: searched in order): a read at only these reads the target cell.</summary>
-    public ImmutableArray<string> TargetSubscriptKeys { get; } = Subscripts.SelectMany(g => g).Select(s => s.Key).Distinct().ToImmutableArray();
+    public ImmutableArray<string> TargetSubscriptKeys { get; } = DistinctKeys(ReadExpr.Flatten(Subscripts), mappedArguments: false);
 
     /// <summary>The keys of the arguments of the maps the target is written through (<c>f</c> of <c>left[f]</c>): the boundary face's own data.</summary>
-    public ImmutableArray<string> BoundaryFaceKeys { get; } =
-        Subscripts.SelectMany(g => g).OfType<MappedSubscript>().SelectMany(m => m.Arguments).Select(a => a.Key).Distinct().ToImmutableArray();
+    public ImmutableArray<string> BoundaryFaceKeys { get; } = DistinctKeys(ReadExpr.Flatten(Subscripts), mappedArguments: true);
+
+    /// <summary>
+    /// The distinct keys, in first-seen order, of the subscripts or (with <paramref name="mappedArguments"/>)
+    /// of the arguments of the mapped ones. A few entries: a list search beats a set.
+    /// </summary>
+    private static ImmutableArray<string> DistinctKeys(IndexTerm[] subscripts, bool mappedArguments)
+    {
+        var keys = ImmutableArray.CreateBuilder<string>();
+        foreach (var s in subscripts)
+        {
+            if (!mappedArguments)
+            {
+                AddOnce(keys, s.Key);
+            }
+            else if (s is MappedSubscript m)
+            {
+                foreach (var a in m.Arguments)
+                {
+                    AddOnce(keys, a.Key);
+                }
+            }
+        }
+
+        return keys.ToImmutable();
+    }
+
+    private static void AddOnce(ImmutableArray<string>.Builder keys, string key)
+    {
+        foreach (var k in keys)
+        {
+            if (string.Equals(k, key, StringComparison.Ordinal))
+            {
+                return;
+            }
+        }
+
+        keys.Add(key);
+    }
 
     /// <summary>The identity of a subscript list, as <see cref="SubscriptKey"/> writes it.</summary>
     public static string KeyOf(ImmutableArray<ImmutableArray<IndexTerm>> subscripts)

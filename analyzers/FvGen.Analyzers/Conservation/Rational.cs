@@ -85,6 +85,19 @@ internal readonly struct Rational : IEquatable<Rational>, IComparable<Rational>
             return false;
         }
 
+        // Most literals of a kernel are integers, halves or quarters (1, 2, 0.5, 0.25): their shortest
+        // decimal text names exactly the binary value (below a million, with at most ten significant
+        // digits), so the text below would give the same number.
+        for (int denominator = 1; denominator <= 8; denominator *= 2)
+        {
+            double scaled = value * denominator;
+            if (Math.Abs(value) < 1e6 && scaled == Math.Floor(scaled))
+            {
+                result = Create(new BigInteger((long)scaled), denominator);
+                return true;
+            }
+        }
+
         string text = value.ToString("R", CultureInfo.InvariantCulture);
         int exponent = 0;
         int e = text.IndexOfAny(new[] { 'E', 'e' });

@@ -39,7 +39,29 @@ internal sealed class ReadExpr : Expr
         _shapeKey ??= SubscriptText.Of("R:", Array, Subscripts, Path, shape: true);
 
     /// <summary>Every subscript, group after group (collected once: the balance asks for them per member).</summary>
-    public IReadOnlyList<IndexTerm> AllSubscripts => _allSubscripts ??= Subscripts.SelectMany(g => g).ToArray();
+    public IReadOnlyList<IndexTerm> AllSubscripts => _allSubscripts ??= Flatten(Subscripts);
+
+    /// <summary>The subscripts group after group, in one array (a loop: this is asked for every read).</summary>
+    internal static IndexTerm[] Flatten(ImmutableArray<ImmutableArray<IndexTerm>> groups)
+    {
+        int count = 0;
+        foreach (var g in groups)
+        {
+            count += g.Length;
+        }
+
+        var all = new IndexTerm[count];
+        int k = 0;
+        foreach (var g in groups)
+        {
+            foreach (var s in g)
+            {
+                all[k++] = s;
+            }
+        }
+
+        return all;
+    }
 
     private IndexTerm[]? _allSubscripts;
 
