@@ -1,3 +1,4 @@
+using FvGen.Analyzers.Tests.Verifiers;
 using System.Collections.Immutable;
 using System.Text.RegularExpressions;
 using Microsoft.CodeAnalysis;
@@ -18,12 +19,6 @@ public sealed partial class IndependentCorpusCompilesTests
         "FVC0001", "FVC0002", "FVC0003", "FVC0004", "FVC0005", "FVC0006", "FVC0100");
 
     private static readonly string CorpusRoot = Path.Combine(AppContext.BaseDirectory, "IndependentCorpus");
-
-    private static readonly Lazy<ImmutableArray<MetadataReference>> References = new(() =>
-        Basic.Reference.Assemblies.Net100.References.All
-            .Cast<MetadataReference>()
-            .Append(MetadataReference.CreateFromFile(typeof(ConservativeUpdateAttribute).Assembly.Location))
-            .ToImmutableArray());
 
     public static TheoryData<string> CorpusFiles()
     {
@@ -48,7 +43,7 @@ public sealed partial class IndependentCorpusCompilesTests
         var compilation = CSharpCompilation.Create(
             "Corpus_" + Path.GetFileNameWithoutExtension(relativePath).Replace('.', '_').Replace('-', '_'),
             [tree],
-            References.Value,
+            TestReferences.All,
             new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, nullableContextOptions: NullableContextOptions.Enable));
 
         var problems = compilation.GetDiagnostics()

@@ -30,29 +30,32 @@ internal sealed record UpdateWrite(
     public ImmutableArray<IndexTerm> AllSubscripts { get; } = ImmutableArray.Create(ReadExpr.Flatten(Subscripts));
 
     /// <summary>The distinct keys of <see cref="AllSubscripts"/> (one to three: searched in order): a read at only these reads the target cell.</summary>
-    public ImmutableArray<string> TargetSubscriptKeys { get; } = DistinctKeys(ReadExpr.Flatten(Subscripts), mappedArguments: false);
+    public ImmutableArray<string> TargetSubscriptKeys { get; } = DistinctKeys(Subscripts, mappedArguments: false);
 
     /// <summary>The keys of the arguments of the maps the target is written through (<c>f</c> of <c>left[f]</c>): the boundary face's own data.</summary>
-    public ImmutableArray<string> BoundaryFaceKeys { get; } = DistinctKeys(ReadExpr.Flatten(Subscripts), mappedArguments: true);
+    public ImmutableArray<string> BoundaryFaceKeys { get; } = DistinctKeys(Subscripts, mappedArguments: true);
 
     /// <summary>
     /// The distinct keys, in first-seen order, of the subscripts or (with <paramref name="mappedArguments"/>)
     /// of the arguments of the mapped ones. A few entries: a list search beats a set.
     /// </summary>
-    private static ImmutableArray<string> DistinctKeys(IndexTerm[] subscripts, bool mappedArguments)
+    private static ImmutableArray<string> DistinctKeys(ImmutableArray<ImmutableArray<IndexTerm>> groups, bool mappedArguments)
     {
         var keys = ImmutableArray.CreateBuilder<string>();
-        foreach (var s in subscripts)
+        foreach (var g in groups)
         {
-            if (!mappedArguments)
+            foreach (var s in g)
             {
-                AddOnce(keys, s.Key);
-            }
-            else if (s is MappedSubscript m)
-            {
-                foreach (var a in m.Arguments)
+                if (!mappedArguments)
                 {
-                    AddOnce(keys, a.Key);
+                    AddOnce(keys, s.Key);
+                }
+                else if (s is MappedSubscript m)
+                {
+                    foreach (var a in m.Arguments)
+                    {
+                        AddOnce(keys, a.Key);
+                    }
                 }
             }
         }

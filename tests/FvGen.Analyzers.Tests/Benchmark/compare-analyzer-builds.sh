@@ -1,8 +1,9 @@
 #!/usr/bin/env bash
 # Runs the compiler of a benchmark project (made by run-analyzer-benchmark.sh) directly, R times for
 # each analyzer DLL given, interleaved, and prints the medians of the compiler's CPU time and of the
-# analyzer time it reports. Without MSBuild around it the spread is smaller than the full build's,
-# so it is the way to compare two versions of the analyzer (`none` runs the compiler without it).
+# analyzer time it reports. MSBuild's own time is left out and the versions are interleaved, so they
+# see the same state of the machine: the way to compare two versions of the analyzer (`none` runs the
+# compiler without it). The reported time still varies by about ±10 % between runs.
 # Speed is never asserted in tests. Usage:
 #   tests/FvGen.Analyzers.Tests/Benchmark/compare-analyzer-builds.sh WORK-DIR R DLL-or-none [DLL-or-none ...]
 set -euo pipefail

@@ -1,3 +1,4 @@
+using FvGen.Analyzers.Tests.Verifiers;
 using System.Collections.Immutable;
 using FvGen.Analyzers.Extraction;
 using FvGen.Analyzers.Tests.Harness;
@@ -15,12 +16,6 @@ namespace FvGen.Analyzers.Tests.Extraction;
 /// </summary>
 public sealed class PurityShortcutTests
 {
-    private static readonly Lazy<ImmutableArray<MetadataReference>> References = new(() =>
-        Basic.Reference.Assemblies.Net100.References.All
-            .Cast<MetadataReference>()
-            .Append(MetadataReference.CreateFromFile(typeof(ConservativeUpdateAttribute).Assembly.Location))
-            .ToImmutableArray());
-
     private const string Tricky = """
         using System;
         using System.Collections.Generic;
@@ -89,7 +84,7 @@ public sealed class PurityShortcutTests
         foreach (string text in texts)
         {
             var tree = CSharpSyntaxTree.ParseText(text, new CSharpParseOptions(LanguageVersion.Latest));
-            var compilation = CSharpCompilation.Create("Purity", [tree], References.Value, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
+            var compilation = CSharpCompilation.Create("Purity", [tree], TestReferences.All, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
             var model = compilation.GetSemanticModel(tree);
 
             // Fresh checkers for each: the cache must not carry one way's verdicts into the other.
@@ -119,7 +114,7 @@ public sealed class PurityShortcutTests
     {
         // The table above is not all pure: the comparison sees impure verdicts and written parameters.
         var tree = CSharpSyntaxTree.ParseText(Tricky, new CSharpParseOptions(LanguageVersion.Latest));
-        var compilation = CSharpCompilation.Create("Purity", [tree], References.Value, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary));
+        var compilation = CSharpCompilation.Create("Purity", [tree], TestReferences.All, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary));
         var fluxes = compilation.GetTypeByMetadataName("Fluxes")!;
         var checker = new PurityChecker(compilation);
         PurityKind Kind(string name) => checker.Classify(fluxes.GetMembers(name).OfType<IMethodSymbol>().Single()).Kind;
