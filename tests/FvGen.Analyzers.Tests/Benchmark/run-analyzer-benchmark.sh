@@ -4,16 +4,28 @@
 # wall time, the compiler's own analyzer timing (-p:ReportAnalyzer=true) and the medians with ratios.
 # The analyzers are referenced as a built DLL, the way the package delivers them, so the build with
 # them does not also pay for building the analyzer project. Not part of the test run: speed is never
-# asserted. Usage: tests/FvGen.Analyzers.Tests/Benchmark/run-analyzer-benchmark.sh [N] [R] [work-dir] [what]
+# asserted. Usage at the end of these notes.
 # what: fvgen (default) measures the FvGen analyzers as built; floor measures an analyzer that
 # registers the same actions and only walks the operations (what asking for operation trees costs);
 # ready-to-run measures the FvGen analyzers precompiled with crossgen2 (restored from NuGet).
+# compiler: fresh (default) starts a new compiler process for every build (UseSharedCompilation=false,
+# what this machine's environment sets), so the analyzers are loaded and JIT-compiled in every build;
+# server uses the SDK's shared compiler server (the SDK's own default and what an IDE's long-lived
+# process resembles): the server and the analyzers in it are warmed by three builds each way first,
+# and the server is shut down at the end.
+# Usage: tests/FvGen.Analyzers.Tests/Benchmark/run-analyzer-benchmark.sh [N] [R] [work-dir] [what] [compiler]
 set -euo pipefail
 N="${1:-500}"
 R="${2:-3}"
 REPO="$(cd "$(dirname "$0")/../../.." && pwd)"
 WORK="${3:-$(mktemp -d)}"
 WHAT="${4:-fvgen}"
+COMPILER="${5:-fresh}"
+case "$COMPILER" in
+  fresh) SHARED=false ;;
+  server) SHARED=true; trap 'dotnet build-server shutdown > /dev/null 2>&1 || true' EXIT ;;
+  *) echo "unknown compiler mode: $COMPILER (fresh or server)" >&2; exit 2 ;;
+esac
 CORPUS="$REPO/tests/FvGen.Analyzers.Tests/Corpus"
 mkdir -p "$WORK/Kernels"
 mapfile -t FILES < <(ls "$CORPUS"/*.cs | sort)
@@ -77,8 +89,17 @@ cat > "$WORK/Bench.csproj" <<XML
 XML
 cd "$WORK"
 # Warm-up: restore and build the runtime reference once.
-dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=true > /dev/null
-dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=false > /dev/null
+dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=true -p:UseSharedCompilation=$SHARED > /dev/null
+dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=false -p:UseSharedCompilation=$SHARED > /dev/null
+if [ "$COMPILER" = server ]; then
+  # The server's first builds load and JIT-compile the compiler and the analyzers: not measured.
+  for ((w = 1; w <= 3; w++)); do
+    for mode in false true; do
+      touch Kernels/*.cs
+      dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=$mode -p:UseSharedCompilation=true > /dev/null
+    done
+  done
+fi
 median() { sort -g | awk '{ v[NR] = $1 } END { print (NR % 2) ? v[(NR + 1) / 2] : (v[NR / 2] + v[NR / 2 + 1]) / 2 }'; }
 : > times-false.txt
 : > times-true.txt
@@ -88,7 +109,7 @@ for ((r = 1; r <= R; r++)); do
     # References are up to date: touching the kernels makes the compiler run on the benchmark project only.
     touch Kernels/*.cs
     start=$(date +%s.%N)
-    dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=$mode -p:ReportAnalyzer=true -v:d > "build-$mode.log"
+    dotnet build Bench.csproj -c Release -p:WithFvGenAnalyzers=$mode -p:UseSharedCompilation=$SHARED -p:ReportAnalyzer=true -v:d > "build-$mode.log"
     end=$(date +%s.%N)
     seconds=$(echo "$end - $start" | bc)
     echo "$seconds" >> "times-$mode.txt"
@@ -105,7 +126,7 @@ echo "FVC diagnostics reported: $(grep -c 'warning FVC' build-true.log || true)"
 without=$(median < times-false.txt)
 with=$(median < times-true.txt)
 analyzers=$(median < fvgen.txt)
-echo "--- medians of $R runs, $N kernels, $(nproc) cores, load average now $(cut -d' ' -f1-3 /proc/loadavg) ---"
+echo "--- medians of $R runs, $N kernels, compiler $COMPILER, $(nproc) cores, load average now $(cut -d' ' -f1-3 /proc/loadavg) ---"
 echo "build without analyzers: $without s"
 echo "build with analyzers:    $with s"
 spread() { sort -g "$1" | awk 'NR == 1 { lo = $1 } { hi = $1 } END { print lo "–" hi }'; }
