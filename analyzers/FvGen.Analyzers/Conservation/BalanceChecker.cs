@@ -471,7 +471,7 @@ internal static class BalanceChecker
         var last = c.Members.OrderBy(m => LeadingOffset(m.Source)).First();
         var others = c.Members.Where(m => m != last).ToList();
         var othersWeight = others.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
-        var needed = last.Sign > 0 ? -othersWeight : othersWeight;
+        var needed = last.InOwnBody(last.Sign > 0 ? -othersWeight : othersWeight);
         string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
         return new Finding(
             FindingKind.UnbalancedFaceTerm,

@@ -62,8 +62,11 @@ internal sealed class CallExpr : Expr
 
     public override IEnumerable<ReadExpr> Reads => Arguments.SelectMany(a => a.Reads);
 
-    public override Expr Shift(IReadOnlyDictionary<string, long> shift) =>
-        new CallExpr(Function, Arguments.Select(a => a.Shift(shift)).ToImmutableArray(), Symmetry, IsBoundaryFlux);
+    public override Expr Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var shifted = Shifted.Each(Arguments, shift, static (a, n) => a.Shift(n));
+        return shifted == Arguments ? this : new CallExpr(Function, shifted, Symmetry, IsBoundaryFlux);
+    }
 
     public override string Render()
     {

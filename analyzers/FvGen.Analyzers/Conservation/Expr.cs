@@ -15,7 +15,7 @@ internal abstract class Expr : IEquatable<Expr>
     /// <summary>Identity with every index offset erased (candidates for a lattice shift share it).</summary>
     public abstract string ShapeKey { get; }
 
-    /// <summary>The same factor at iteration <c>i + n</c>.</summary>
+    /// <summary>The same factor at iteration <c>i + n</c>; the factor itself when the shift does not move it.</summary>
     public abstract Expr Shift(IReadOnlyDictionary<string, long> shift);
 
     /// <summary>Every array read inside, at any depth.</summary>

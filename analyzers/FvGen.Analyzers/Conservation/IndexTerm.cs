@@ -17,6 +17,7 @@ internal abstract class IndexTerm : IEquatable<IndexTerm>
     /// <summary>Identity with every offset erased: equal shapes may differ by a lattice shift.</summary>
     public abstract string ShapeKey { get; }
 
+    /// <summary>The subscript at iteration <c>i + n</c>; the same object when the shift does not move it.</summary>
     public abstract IndexTerm Shift(IReadOnlyDictionary<string, long> shift);
 
     /// <summary>The affine subscripts inside, in order (the term itself, or a map's arguments).</summary>
@@ -42,7 +43,11 @@ internal sealed class AffineSubscript : IndexTerm
 
     public override IEnumerable<AffineIndex> AffineParts => new[] { Index };
 
-    public override IndexTerm Shift(IReadOnlyDictionary<string, long> shift) => new AffineSubscript(Index.Shift(shift));
+    public override IndexTerm Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var shifted = Index.Shift(shift);
+        return ReferenceEquals(shifted, Index) ? this : new AffineSubscript(shifted);
+    }
 
     public override string ToString() => Index.ToString();
 }
@@ -69,8 +74,11 @@ internal sealed class MappedSubscript : IndexTerm
 
     public override IEnumerable<AffineIndex> AffineParts => Arguments;
 
-    public override IndexTerm Shift(IReadOnlyDictionary<string, long> shift) =>
-        new MappedSubscript(Map, Arguments.Select(a => a.Shift(shift)).ToImmutableArray());
+    public override IndexTerm Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var shifted = Shifted.Each(Arguments, shift, static (a, s) => a.Shift(s));
+        return shifted == Arguments ? this : new MappedSubscript(Map, shifted);
+    }
 
     public override string ToString() => Map + "[" + string.Join(", ", Arguments) + "]";
 }

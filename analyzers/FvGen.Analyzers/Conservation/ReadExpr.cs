@@ -72,8 +72,30 @@ internal sealed class ReadExpr : Expr
 
     public override IEnumerable<ReadExpr> Reads => new[] { this };
 
-    public override Expr Shift(IReadOnlyDictionary<string, long> shift) =>
-        new ReadExpr(Array, Subscripts.Select(g => g.Select(s => s.Shift(shift)).ToImmutableArray()).ToImmutableArray(), Path, Role);
+    public override Expr Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        ImmutableArray<IndexTerm>[]? moved = null;
+        for (int k = 0; k < Subscripts.Length; k++)
+        {
+            var group = Subscripts[k];
+            var shifted = Shifted.Each(group, shift, static (s, n) => s.Shift(n));
+            if (moved is null && shifted != group)
+            {
+                moved = new ImmutableArray<IndexTerm>[Subscripts.Length];
+                for (int before = 0; before < k; before++)
+                {
+                    moved[before] = Subscripts[before];
+                }
+            }
+
+            if (moved is not null)
+            {
+                moved[k] = shifted;
+            }
+        }
+
+        return moved is null ? this : new ReadExpr(Array, ImmutableArray.Create(moved), Path, Role);
+    }
 
     /// <summary>A loop variable used as a value (<c>x0 + i * dx</c>) is a read of the empty array name.</summary>
     public static ReadExpr LoopIndex(string variable) =>

@@ -21,7 +21,11 @@ internal sealed class ReciprocalExpr : Expr
 
     public override IEnumerable<ReadExpr> Reads => Denominator.Reads;
 
-    public override Expr Shift(IReadOnlyDictionary<string, long> shift) => new ReciprocalExpr(Denominator.Shift(shift));
+    public override Expr Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var shifted = Denominator.Shift(shift);
+        return ReferenceEquals(shifted, Denominator) ? this : new ReciprocalExpr(shifted);
+    }
 
     public override string Render() => "1.0 / (" + Denominator.Render() + ")";
 }

@@ -8,11 +8,25 @@ namespace FvGen.Analyzers.Conservation;
 /// <summary>A term together with the write it belongs to.</summary>
 internal sealed record AttributedTerm(Term Term, UpdateWrite Write);
 
-/// <summary>A member of a shift class: its term, the shift from the representative, and the sign of the match.</summary>
-internal sealed record ClassMember(AttributedTerm Source, IReadOnlyDictionary<string, long> Shift, int Sign)
+/// <summary>
+/// A member of a shift class: its term, the shift from the representative, the sign of the match,
+/// and the scale of its body in the representative's (one, unless a shift made a reciprocal pull out
+/// another weight: see <see cref="Term.Shift(IReadOnlyDictionary{string, long}, out SymPoly)"/>).
+/// </summary>
+internal sealed record ClassMember(AttributedTerm Source, IReadOnlyDictionary<string, long> Shift, int Sign, SymPoly Scale)
 {
-    /// <summary>The coefficient this member adds to the class sum.</summary>
-    public SymPoly Weight => Sign > 0 ? Source.Term.Coefficient : -Source.Term.Coefficient;
+    /// <summary>The coefficient this member adds to the class sum (in the representative's body).</summary>
+    public SymPoly Weight
+    {
+        get
+        {
+            var own = Sign > 0 ? Source.Term.Coefficient : -Source.Term.Coefficient;
+            return Scale.IsOne ? own : own * Scale;
+        }
+    }
+
+    /// <summary>A weight in the representative's body as a coefficient of this member's own body.</summary>
+    public SymPoly InOwnBody(SymPoly weight) => Scale.IsOne ? weight : weight * (Scale.TryReciprocal() ?? throw new ModelLimitException("a reciprocal's leading weight that cannot be divided out"));
 }
 
 /// <summary>
@@ -48,7 +62,7 @@ internal sealed class ShiftClass
                 var match = ShiftMatcher.TryMatch(c.Representative.Term, t.Term, space);
                 if (match is not null)
                 {
-                    c.Members.Add(new ClassMember(t, match.Shift, match.Sign));
+                    c.Members.Add(new ClassMember(t, match.Shift, match.Sign, match.Scale));
                     placed = true;
                     break;
                 }
@@ -56,7 +70,7 @@ internal sealed class ShiftClass
 
             if (!placed)
             {
-                var created = new ShiftClass(new ClassMember(t, empty, 1));
+                var created = new ShiftClass(new ClassMember(t, empty, 1, SymPoly.One));
                 classes.Add(created);
                 sameShape.Add(created);
             }

@@ -24,8 +24,17 @@ internal static class ShiftMatcher
     /// </summary>
     public static readonly IReadOnlyDictionary<string, long> NoShift = new Dictionary<string, long>(StringComparer.Ordinal);
 
-    /// <summary>A found shift: body B equals <see cref="Sign"/> times body A at iteration <c>i + Shift</c>.</summary>
-    public sealed record Match(IReadOnlyDictionary<string, long> Shift, int Sign);
+    /// <summary>
+    /// A found shift: body B equals <see cref="Sign"/> times <see cref="Scale"/> times body A at
+    /// iteration <c>i + Shift</c> (the scale is one unless a reciprocal pulled out another weight).
+    /// </summary>
+    public sealed record Match(IReadOnlyDictionary<string, long> Shift, int Sign, SymPoly Scale)
+    {
+        public Match(IReadOnlyDictionary<string, long> shift, int sign)
+            : this(shift, sign, SymPoly.One)
+        {
+        }
+    }
 
     /// <summary>Finds how <paramref name="b"/> is a shifted copy of <paramref name="a"/>, or null.</summary>
     public static Match? TryMatch(Term a, Term b, LoopSpace space)
@@ -84,9 +93,17 @@ internal static class ShiftMatcher
 
             pairs.Clear();
             var shift = PairReads(first, candidate, pairs) ? Solve(pairs, space) : null;
-            if (shift is not null && (ShiftedEquality.Bodies(a, b, shift) ?? a.Shift(shift).BodyKey == b.BodyKey))
+            if (shift is null)
             {
-                return new Match(shift, 1);
+                continue;
+            }
+
+            switch (ShiftedEquality.Bodies(a, b, shift))
+            {
+                case true:
+                    return new Match(shift, 1);
+                case null when a.Shift(shift, out var scale) is { } moved && moved.BodyKey == b.BodyKey:
+                    return new Match(shift, 1, scale);
             }
         }
 

@@ -266,7 +266,12 @@ internal sealed class SumExpr
         return Factor(new ReciprocalExpr(Scale(leadInverse).StripOrigins())).Scale(leadInverse).WithOrigins(origins);
     }
 
-    public SumExpr Shift(IReadOnlyDictionary<string, long> shift) => Of(Terms.Select(t => t.Shift(shift)));
+    /// <summary>The sum at iteration <c>i + n</c>; this sum itself when no term moves (it is canonical already).</summary>
+    public SumExpr Shift(IReadOnlyDictionary<string, long> shift)
+    {
+        var shifted = Shifted.Each(Terms, shift, static (t, n) => t.Shift(n));
+        return shifted == Terms ? this : Of(shifted);
+    }
 
     /// <summary>An invariant that is a true sum (not a monomial) stands for itself as one opaque symbol.</summary>
     public static SymPoly OpaqueInvariant(SymPoly value) => SymPoly.Symbol("(" + CSharpText.Of(value) + ")");

@@ -136,28 +136,63 @@ internal sealed class Term
 
     public Term WithCoefficient(SymPoly coefficient) => new(coefficient, this);
 
+    /// <summary>The term at iteration <c>i + n</c> (see the overload that also gives the scale).</summary>
+    public Term Shift(IReadOnlyDictionary<string, long> shift) => Shift(shift, out _);
+
     /// <summary>
-    /// The term at iteration <c>i + n</c>. A reciprocal is normalised again (its leading coefficient
-    /// pulled out), exactly as the extraction builds it, so equal terms keep equal keys.
+    /// The term at iteration <c>i + n</c>; the term itself when no factor moves. A reciprocal that
+    /// moves is normalised again (its leading coefficient pulled out), exactly as the extraction
+    /// builds it, so equal terms keep equal keys. That can pull out another weight than before: the
+    /// leading term is the first by key, and offsets sort as text (<c>u[i - 1]</c> before
+    /// <c>u[i - 2]</c>, yet <c>u[i - 1]</c> before <c>u[i]</c>), so the weight <c>3</c> pulled out of
+    /// <c>1/(2 u[i - 2] + 3 u[i - 1])</c> becomes <c>2</c> one cell on. The shifted coefficient then
+    /// differs from this one; <paramref name="scale"/> is the product of the leading weights pulled
+    /// out: the shifted body is <c>scale</c> times this body at <c>i + n</c>.
     /// </summary>
-    public Term Shift(IReadOnlyDictionary<string, long> shift)
+    public Term Shift(IReadOnlyDictionary<string, long> shift, out SymPoly scale)
     {
+        scale = SymPoly.One;
+        int unmoved = 0;
+        Expr? firstMoved = null;
+        for (; unmoved < Factors.Length; unmoved++)
+        {
+            var shifted = Factors[unmoved].Shift(shift);
+            if (!ReferenceEquals(shifted, Factors[unmoved]))
+            {
+                firstMoved = shifted;
+                break;
+            }
+        }
+
+        if (firstMoved is null)
+        {
+            return this;
+        }
+
         var coefficient = Coefficient;
         var factors = new List<Expr>(Factors.Length);
-        foreach (var f in Factors)
+        for (int k = 0; k < Factors.Length; k++)
         {
-            if (f is ReciprocalExpr r)
+            var moved = k < unmoved ? Factors[k] : k == unmoved ? firstMoved : Factors[k].Shift(shift);
+            if (moved is ReciprocalExpr r && !ReferenceEquals(moved, Factors[k]))
             {
-                var normalised = r.Denominator.Shift(shift).Reciprocal(SumExpr.OpaqueInvariant);
+                var normalised = r.Denominator.Reciprocal(SumExpr.OpaqueInvariant);
                 if (normalised.Terms.Length == 1)
                 {
-                    coefficient *= normalised.Terms[0].Coefficient;
+                    var pulledOut = normalised.Terms[0].Coefficient;
+                    coefficient *= pulledOut;
+                    if (!pulledOut.IsOne)
+                    {
+                        // 1/D = (1/lead) · 1/(D/lead): the lead is what this body weighs in the shifted one.
+                        scale *= r.Denominator.Terms[0].Coefficient;
+                    }
+
                     factors.AddRange(normalised.Terms[0].Factors);
                     continue;
                 }
             }
 
-            factors.Add(f.Shift(shift));
+            factors.Add(moved);
         }
 
         return new Term(coefficient, factors, Origins);

@@ -204,6 +204,34 @@ public sealed class RefinementTests
         Assert.Empty(Check(I, Assign("R", Cell(At("i")), value)));
     }
 
+    [Theory]
+    [InlineData(0)]
+    [InlineData(10)]
+    [InlineData(-9)]
+    [InlineData(1)]
+    public void WeightedReciprocalFluxTelescopesAtAnyOffset(long offset)
+    {
+        // c (F(i) - F(i-1)) with F(i) = 1 / (2 u[i+o-1] + 3 u[i+o]). Offsets sort as text, so at 0, 10 and
+        // -9 the two faces order their reads differently (u[i - 1] before u[i], but u[i - 1] before
+        // u[i - 2]; u[i + 10] before u[i + 9]). The faces then pulled out different weights (2 and 3),
+        // and this conservative flux was reported unbalanced. At 1 both faces sort alike (a control).
+        SumExpr F(long at) => Div(Num(1), Num(2) * Read("u", At("i", at + offset - 1)) + Num(3) * Read("u", At("i", at + offset)));
+        var value = Sym("c") * (F(0) - F(-1));
+        Assert.Empty(Check(I, Assign("R", Cell(At("i")), value)));
+    }
+
+    [Theory]
+    [InlineData(0)]
+    [InlineData(10)]
+    [InlineData(1)]
+    public void WeightedReciprocalFluxWithSwappedWeightsIsRefuted(long offset)
+    {
+        // The left face evaluates 1 / (3 u[i-2] + 2 u[i-1]): not the right face's flux one cell over.
+        var right = Div(Num(1), Num(2) * Read("u", At("i", offset - 1)) + Num(3) * Read("u", At("i", offset)));
+        var left = Div(Num(1), Num(3) * Read("u", At("i", offset - 2)) + Num(2) * Read("u", At("i", offset - 1)));
+        Assert.NotEmpty(Check(I, Assign("R", Cell(At("i")), Sym("c") * (right - left))));
+    }
+
     [Fact]
     public void PrecomputedInverseMeasureIsDividedOut()
     {

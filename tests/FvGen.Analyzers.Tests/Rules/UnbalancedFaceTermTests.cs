@@ -43,6 +43,27 @@ public sealed class UnbalancedFaceTermTests
                 .WithArguments("u[i - 1]", "`u[i - 1]` 1/4, `u[i + 1]` 1/4", "1/2", "1", "an update must carry the old total over with weight exactly 1"));
 
     [Fact]
+    public Task WeightedReciprocalFluxBehindTheCellIsQuiet() =>
+        // Both faces lie behind the cell (u[i - 2], u[i - 1], u[i]): the offsets' text sorts against their
+        // order, which once made the two faces' weights differ and this conservative step reported.
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Upstream
+            {
+                [ConservativeUpdate]
+                public static void Step(double[] u, double[] next, double c)
+                {
+                    for (int i = 2; i < u.Length; i++)
+                    {
+                        double right = 1.0 / (2.0 * u[i - 1] + 3.0 * u[i]);
+                        double left = 1.0 / (2.0 * u[i - 2] + 3.0 * u[i - 1]);
+                        next[i] = u[i] - c * (right - left);
+                    }
+                }
+            }
+            """);
+
+    [Fact]
     public Task ConservativeLaplacianIsQuiet() =>
         VerifyCS.VerifyAnalyzerAsync(
             """
