@@ -540,18 +540,12 @@ internal sealed partial class LoopNestReader
         var operations = _method.Operations;
         foreach (var op in operations.Descendants(loop))
         {
-            if (op is IVariableDeclaratorOperation declarator)
+            if (op.Kind == OperationKind.VariableDeclarator && op is IVariableDeclaratorOperation declarator)
             {
                 declaredInside.Add(declarator.Symbol);
             }
 
-            var target = op switch
-            {
-                IAssignmentOperation a => a.Target,
-                IIncrementOrDecrementOperation i => i.Target,
-                _ => null,
-            };
-            if (target is ILocalReferenceOperation local)
+            if (WrittenTarget.Of(op) is ILocalReferenceOperation local)
             {
                 assigned.Add((op, local.Local));
             }

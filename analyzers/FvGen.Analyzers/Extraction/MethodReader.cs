@@ -339,12 +339,7 @@ internal static class MethodReader
         var targets = new HashSet<IOperation>();
         foreach (var op in method.Operations.Descendants(loop))
         {
-            IOperation? target = op switch
-            {
-                IAssignmentOperation a => a.Target,
-                IIncrementOrDecrementOperation i => i.Target,
-                _ => null,
-            };
+            var target = WrittenTarget.Of(op);
             if (target is null)
             {
                 continue;
@@ -392,12 +387,7 @@ internal static class MethodReader
     }
 
     private static bool WritesElements(IOperation loop, OperationIndex operations) =>
-        operations.Descendants(loop).Any(op => op switch
-        {
-            IAssignmentOperation a => IsElementTarget(a.Target),
-            IIncrementOrDecrementOperation i => IsElementTarget(i.Target),
-            _ => false,
-        });
+        operations.Descendants(loop).Any(op => WrittenTarget.Of(op) is { } target && IsElementTarget(target));
 
     private static bool IsElementTarget(IOperation target)
     {
@@ -481,12 +471,7 @@ internal static class MethodReader
 
     private static IEnumerable<ILocalSymbol> AssignedLocals(IOperation loop, OperationIndex operations) =>
         operations.Descendants(loop)
-            .Select(op => op switch
-            {
-                IAssignmentOperation a => a.Target,
-                IIncrementOrDecrementOperation i => i.Target,
-                _ => null,
-            })
+            .Select(WrittenTarget.Of)
             .OfType<ILocalReferenceOperation>()
             .Select(l => l.Local)
             .Distinct(SymbolEqualityComparer.Default)

@@ -56,7 +56,8 @@ public sealed class OperationIndexTests
         Assert.Throws<ArgumentException>(() => index.Descendants(others[0]));
     }
 
-    private static (SemanticModel Model, List<IOperation> Bodies) Bodies(string source)
+    /// <summary>The bound bodies of every method of <paramref name="source"/> (the model keeps them alive).</summary>
+    internal static (SemanticModel Model, List<IOperation> Bodies) Bodies(string source)
     {
         var tree = CSharpSyntaxTree.ParseText(TestReferences.Usings + source, new CSharpParseOptions(LanguageVersion.Latest));
         var compilation = CSharpCompilation.Create("Index", [tree], TestReferences.All, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
