@@ -472,7 +472,7 @@ internal static class BalanceChecker
         var others = c.Members.Where(m => m != last).ToList();
         var othersWeight = others.Aggregate(SymPoly.Zero, (s, m) => s + m.Weight);
         var needed = last.InOwnBody(last.Sign > 0 ? -othersWeight : othersWeight);
-        string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
+        string weights = Weights(c);
         return new Finding(
             FindingKind.UnbalancedFaceTerm,
             ImmutableArray.Create(
@@ -486,10 +486,20 @@ internal static class BalanceChecker
             ImmutableDictionary<string, string?>.Empty);
     }
 
+    /// <summary>
+    /// Each member with its weight, for a message. A member whose body is a scaled copy of the
+    /// representative's (a reciprocal that pulled out another weight) is shown as the representative's
+    /// body moved onto it, with the weight the class sum counts, so that the weights shown add up to
+    /// the sum shown; the others as written.
+    /// </summary>
+    private static string Weights(ShiftClass c) => string.Join(", ", c.Members.Select(m => m.Scale.IsOne
+        ? "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient
+        : "`" + Text.Short(new Term(SymPoly.One, c.Representative.Term.Factors.Select(f => f.Shift(m.Shift)), ImmutableArray<int>.Empty).RenderBody()) + "` " + m.Weight));
+
     private static Finding OldTotal(ShiftClass c)
     {
         var rep = c.Representative;
-        string weights = string.Join(", ", c.Members.Select(m => "`" + Text.Short(m.Source.Term.RenderBody()) + "` " + m.Source.Term.Coefficient));
+        string weights = Weights(c);
         return new Finding(
             FindingKind.UnbalancedFaceTerm,
             ImmutableArray.Create(

@@ -64,6 +64,35 @@ public sealed class UnbalancedFaceTermTests
             """);
 
     [Fact]
+    public Task WeightedReciprocalFluxOutOfBalanceShowsWeightsThatAddUp() =>
+        // The right face's flux is the left one's moved by a cell, but scaled: it pulled out the weight
+        // 2 where the left pulled out 3. It is shown as the left body moved onto it, with the weight the
+        // class counts (-c/3, not its own -c/2), so the weights shown add up to the sum shown.
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Upstream
+            {
+                [ConservativeUpdate]
+                public static void Step(double[] u, double[] next, double c)
+                {
+                    for (int i = 2; i < u.Length; i++)
+                    {
+                        double right = 1.0 / (2.0 * {|#2:u[i - 1]|} + 3.0 * {|#3:u[i]|});
+                        double left = 1.0 / (2.0 * {|#1:u[i - 2]|} + 3.0 * {|#0:u[i - 1]|});
+                        next[i] = u[i] - c * (right - 2.0 * left);
+                    }
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.UnbalancedFaceTerm).WithLocation(0).WithLocation(1).WithLocation(2).WithLocation(3)
+                .WithArguments(
+                    "(1.0 / (u[i - 1] + 2 * u[i - 2] / 3.0))",
+                    "`(1.0 / (u[i - 1] + 2 * u[i - 2] / 3.0))` 2·c/3, `(1.0 / (2 * u[i - 1] / 3.0 + u[i]))` -c/3",
+                    "c/3",
+                    "0",
+                    "for the difference to cancel, `(1.0 / (u[i - 1] + 2 * u[i - 2] / 3.0))` needs weight c/3"));
+
+    [Fact]
     public Task ConservativeLaplacianIsQuiet() =>
         VerifyCS.VerifyAnalyzerAsync(
             """
