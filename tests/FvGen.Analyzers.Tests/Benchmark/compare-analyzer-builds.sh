@@ -18,6 +18,8 @@ DLLS=()
 for dll in "$@"; do
   if [ "$dll" = none ]; then DLLS+=(none); else
     [ -f "$dll" ] || { echo "no such analyzer DLL: $dll" >&2; exit 2; }
+    # The compiler reports an analyzer under its assembly name; a renamed copy does not load beside it.
+    [ "$(basename "$dll")" = FvGen.Analyzers.dll ] || { echo "$dll: name each version FvGen.Analyzers.dll, in a directory of its own" >&2; exit 2; }
     DLLS+=("$(cd "$(dirname "$dll")" && pwd)/$(basename "$dll")")
   fi
 done
@@ -33,6 +35,11 @@ for ((r = 1; r <= R; r++)); do
     out=$(/usr/bin/time -f "cpu %U %S" "$CSC" @compare.rsp 2>&1)
     cpu=$(echo "$out" | awk '/^cpu / { print $2 + $3 }')
     reported=$(echo "$out" | grep -E "^\s+[<0-9.]+\s+[<0-9]+\s+FvGen\.Analyzers, Version" | awk '{ print $1 }' || true)
+    if [ "$dll" != none ] && [ -z "$reported" ]; then
+      echo "the compiler reported no FvGen analyzer time with $dll (was it loaded?); its output:" >&2
+      echo "$out" | tail -20 >&2
+      exit 1
+    fi
     echo "$dll $cpu ${reported:-0}" >> "$RESULTS"
     echo "run $r, $dll: compiler CPU ${cpu} s, FvGen analyzer time ${reported:--} s"
   done
