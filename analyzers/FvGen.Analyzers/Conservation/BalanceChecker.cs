@@ -144,8 +144,12 @@ internal static class BalanceChecker
             yield break;
         }
 
-        // Writing a neighbour of the loop's cell (r[i - 1]) is the half of a face loop that was kept.
-        if (writes[0].Subscripts.SelectMany(g => g).OfType<AffineSubscript>().Any(a => !a.Index.IsConstant && !a.Index.Constant.IsZero))
+        // Writing a neighbour of the loop's cell (r[i - 1]) is the half of a face loop that was kept:
+        // lone face terms, each given to that one cell. A term with counterparts that do not cancel,
+        // or two lone terms that are one face evaluated two ways, say it is the cell's own update at an
+        // offset subscript (r[i + ng] in an array with ghost cells), read as any other.
+        if (writes[0].Subscripts.SelectMany(g => g).OfType<AffineSubscript>().Any(a => !a.Index.IsConstant && !a.Index.Constant.IsZero)
+            && AreLoneFaceTerms(unbalanced))
         {
             foreach (var c in unbalanced)
             {
@@ -194,10 +198,7 @@ internal static class BalanceChecker
                 continue;
             }
 
-            var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && Similar(a, x)
-                && ((a.Sum + x.Sum).IsZero || (SameFunction(a, x) && (a.Sum - x.Sum).IsZero))
-                && (LeadingOffset(a.Representative) != LeadingOffset(x.Representative)
-                    || (SameFunction(a, x) && (a.Sum + x.Sum).IsZero)));
+            var b = singles.FirstOrDefault(x => x != a && !paired.Contains(x) && EvaluatedTwoWays(a, x));
             if (b is not null)
             {
                 paired.Add(a);
@@ -681,7 +682,7 @@ internal static class BalanceChecker
         foreach (var read in member.Source.Term.Reads)
         {
             bool ownFaceData = boundaryFace.Length > 0 && read.Role != DataRole.InteriorFace && AllIn(read.AllSubscripts, boundaryFace);
-            if (ownFaceData)
+            if (ownFaceData || (read.IsLoopIndex && IndexesTarget(read, member.Source.Write)))
             {
                 continue;
             }
@@ -693,6 +694,68 @@ internal static class BalanceChecker
         }
 
         return true;
+    }
+
+    /// <summary>True when every class holds one term and no two of them are one face evaluated two ways.</summary>
+    private static bool AreLoneFaceTerms(List<ShiftClass> classes)
+    {
+        for (int k = 0; k < classes.Count; k++)
+        {
+            if (classes[k].Members.Count != 1)
+            {
+                return false;
+            }
+
+            for (int other = k + 1; other < classes.Count; other++)
+            {
+                if (EvaluatedTwoWays(classes[k], classes[other]))
+                {
+                    return false;
+                }
+            }
+        }
+
+        return true;
+    }
+
+    /// <summary>
+    /// Two lone terms that are one face evaluated two ways: similar, with weights that cancel (or equal
+    /// weights of the same function, an argument swapped), at two different faces (or cancelling calls
+    /// of one function at one face).
+    /// </summary>
+    private static bool EvaluatedTwoWays(ShiftClass a, ShiftClass x) =>
+        Similar(a, x)
+        && ((a.Sum + x.Sum).IsZero || (SameFunction(a, x) && (a.Sum - x.Sum).IsZero))
+        && (LeadingOffset(a.Representative) != LeadingOffset(x.Representative)
+            || (SameFunction(a, x) && (a.Sum + x.Sum).IsZero));
+
+    /// <summary>
+    /// True when the loop variable read as a value (<c>x0 + (i + 0.5) * dx</c>) indexes the write's
+    /// target cell directly (<c>r[i]</c>, <c>r[i + ng]</c>): the iteration names the cell, so the value
+    /// is the cell's own data, wherever the target's offset puts it. Not through an index map: the face
+    /// index of a face loop names a face, and its value is face data.
+    /// </summary>
+    private static bool IndexesTarget(ReadExpr loopIndex, UpdateWrite write)
+    {
+        if (loopIndex.Subscripts[0][0] is not AffineSubscript { Index.Linear.Length: 1 } index)
+        {
+            return false;
+        }
+
+        var variable = index.Index.Linear[0];
+
+        foreach (var group in write.Subscripts)
+        {
+            foreach (var subscript in group)
+            {
+                if (subscript is AffineSubscript affine && affine.Index.Linear.Any(l => l.Key == variable.Key))
+                {
+                    return true;
+                }
+            }
+        }
+
+        return false;
     }
 
     /// <summary>True when every subscript's key is one of <paramref name="keys"/> (a few: a scan beats hashing).</summary>
