@@ -135,18 +135,24 @@ internal static class ComponentWiseOperators
         switch (op)
         {
             case SyntaxKind.PlusToken when binary.IsKind(SyntaxKind.AddExpression):
+                // A sum commutes: `a.F + b.F` or `b.F + a.F`.
+                return FieldOf(left, first) is { } a && FieldOf(right, second) == a ? a
+                    : FieldOf(left, second) is { } b && FieldOf(right, first) == b ? b : null;
             case SyntaxKind.MinusToken when binary.IsKind(SyntaxKind.SubtractExpression):
-                return FieldOf(left, first) is { } a && FieldOf(right, second) == a ? a : null;
+                return FieldOf(left, first) is { } d && FieldOf(right, second) == d ? d : null;
             case SyntaxKind.AsteriskToken when binary.IsKind(SyntaxKind.MultiplyExpression):
-                // `s * a.F` (scalar first) or `a.F * s` (state first).
-                return FieldOf(right, second) is { } f1 && IsName(left, first) ? f1
-                    : FieldOf(left, first) is { } f2 && IsName(right, second) ? f2 : null;
+                // A scalar times a state (`operator *(double s, T a)` or `(T a, double s)`), in either order.
+                return ScaledField(left, right, first, second) ?? ScaledField(right, left, first, second);
             case SyntaxKind.SlashToken when binary.IsKind(SyntaxKind.DivideExpression):
                 return FieldOf(left, first) is { } f && IsName(right, second) ? f : null;
             default:
                 return null;
         }
     }
+
+    /// <summary>The field <paramref name="state"/> reads when <paramref name="scalar"/> names the other parameter (<c>s * a.F</c>), or null.</summary>
+    private static string? ScaledField(ExpressionSyntax scalar, ExpressionSyntax state, string first, string second) =>
+        IsName(scalar, first) ? FieldOf(state, second) : IsName(scalar, second) ? FieldOf(state, first) : null;
 
     private static string? FieldOf(ExpressionSyntax e, string parameter) =>
         e is MemberAccessExpressionSyntax { Expression: IdentifierNameSyntax owner, Name: var name } && owner.Identifier.Text == parameter

@@ -129,6 +129,14 @@ internal sealed partial class LoopNestReader
         return true;
     }
 
+    /// <summary>The local or parameter <paramref name="operation"/> reads, or null.</summary>
+    private static ISymbol? NamedValue(IOperation operation) => StripConversions(operation) switch
+    {
+        ILocalReferenceOperation l => l.Local,
+        IParameterReferenceOperation p => p.Parameter,
+        _ => null,
+    };
+
     /// <summary><c>for (int n = offsets[c]; n &lt; offsets[c + 1]; n++)</c>: the faces of cell <c>c</c> in a compressed-row list.</summary>
     private bool CompressedRowHeader(IForLoopOperation loop, out ISymbol? cell, out string? cellVariable, out ISymbol? position, out string? offsets)
     {
@@ -182,11 +190,10 @@ internal sealed partial class LoopNestReader
         var index = StripConversions(indices[0]);
         var symbol = index switch
         {
-            ILocalReferenceOperation l => (ISymbol)l.Local,
-            IParameterReferenceOperation p => p.Parameter,
-            IBinaryOperation { OperatorKind: BinaryOperatorKind.Add, LeftOperand: var l, RightOperand.ConstantValue: { HasValue: true, Value: int } } b
-                => StripConversions(l) switch { ILocalReferenceOperation x => x.Local, IParameterReferenceOperation y => y.Parameter, _ => null },
-            _ => null,
+            // `c + 1` or `1 + c`: the constant is checked against the offset below.
+            IBinaryOperation { OperatorKind: BinaryOperatorKind.Add, RightOperand.ConstantValue: { HasValue: true, Value: int } } b => NamedValue(b.LeftOperand),
+            IBinaryOperation { OperatorKind: BinaryOperatorKind.Add, LeftOperand.ConstantValue: { HasValue: true, Value: int } } b => NamedValue(b.RightOperand),
+            _ => NamedValue(index),
         };
         if (symbol is null || !_reader.Bindings.TryGetValue(symbol, out var binding) || binding is not ValueBinding { Value: var value }
             || value.Terms.Length != 1 || value.Terms[0].Factors.Length != 1 || value.Terms[0].Factors[0] is not ReadExpr { IsLoopIndex: true } loopIndex)

@@ -198,4 +198,60 @@ public sealed class NotAnalyzedTests
                 }
             }
             """);
+
+    [Fact]
+    public Task StateOperatorsWithCommutedOperandsAreArithmetic() =>
+        // A sum and a scalar product commute, so `y.A + x.A` and `x.A * s` are as component-wise as the
+        // other order (they were not analyzed before). A difference does not: see the test below.
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            struct Pair
+            {
+                public double A, B;
+
+                public static Pair operator +(Pair x, Pair y) => new Pair { A = y.A + x.A, B = y.B + x.B };
+
+                public static Pair operator *(double s, Pair x) => new Pair { A = x.A * s, B = s * x.B };
+            }
+
+            static class Kernel
+            {
+                [ConservativeUpdate]
+                public static void Scatter([FaceData] Pair[] flux, Pair[] r, double dt)
+                {
+                    for (int i = 1; i < r.Length; i++)
+                    {
+                        r[i - 1] = r[i - 1] + (-dt) * flux[i];
+                        r[i] = r[i] + dt * flux[i];
+                    }
+                }
+            }
+            """);
+
+    [Fact]
+    public Task StateDifferenceWithSwappedOperandsIsNotTakenAsArithmetic() =>
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            struct Pair
+            {
+                public double A, B;
+
+                // y - x for x - y: not the difference it looks like.
+                public static Pair operator -(Pair x, Pair y) => new Pair { A = y.A - x.A, B = y.B - x.B };
+            }
+
+            static class Kernel
+            {
+                [ConservativeUpdate]
+                public static void Scatter([FaceData] Pair[] flux, Pair[] r)
+                {
+                    for (int i = 1; i < r.Length; i++)
+                    {
+                        r[i - 1] = {|#0:r[i - 1] - flux[i]|};
+                        r[i] = r[i] - flux[i - 1];
+                    }
+                }
+            }
+            """,
+            VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("the operator `Pair.operator -(Pair, Pair)` is not visibly component-wise (each field of the result the same field of the operands, combined by that operator)"));
 }
