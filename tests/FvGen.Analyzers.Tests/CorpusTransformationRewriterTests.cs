@@ -90,4 +90,25 @@ public sealed class CorpusTransformationRewriterTests
         Assert.True(extracted.Contains("r[i] -= extracted1;"), extracted);
         Assert.True(extracted.Contains("s = r[0];"), extracted);
     }
+
+    [Fact]
+    public void ReversesCountedLoopsOnly()
+    {
+        var source = """
+            class C
+            {
+                void M(double[] u, double[] r)
+                {
+                    for (int i = 1; i < u.Length - 1; i++)
+                        r[i] = u[i + 1] - u[i];
+                    for (int j = 0; j < 4; j += 2)
+                        r[j] = 0;
+                }
+            }
+            """;
+        var reversed = ReversedLoops.Apply(source);
+        Assert.True(reversed.Contains("for (int i = (u.Length - 1) - 1; i >= (1); i--)"), reversed);
+        Assert.True(reversed.Contains("r[i] = u[i + 1] - u[i];"), reversed);
+        Assert.True(reversed.Contains("for (int j = 0; j < 4; j += 2)"), reversed);
+    }
 }

@@ -192,7 +192,9 @@ internal sealed partial class LoopNestReader
 
         var (primary, primaryStep) = steps[0];
         var index = AddVariable(primary, Math.Abs(primaryStep), LoopVariableKind.Lattice);
-        var primaryStart = initial.TryGetValue(primary, out var p0) ? _reader.Read(p0) : null;
+        // Where the loop starts matters only to variables stepped in lockstep with the first: a start
+        // the checker cannot read (`u.GetLength(0) - 2` of a descending loop) is no reason to give up.
+        var primaryStart = steps.Count > 1 && initial.TryGetValue(primary, out var p0) ? _reader.Read(p0) : null;
         foreach (var (local, step) in steps.Skip(1))
         {
             // Variables stepped in lockstep are affine in the first: v = v0 + (s_v / s_i)(i − i0).

@@ -254,4 +254,22 @@ public sealed class NotAnalyzedTests
             }
             """,
             VerifyCS.Diagnostic(DiagnosticIds.NotAnalyzed).WithLocation(0).WithArguments("the operator `Pair.operator -(Pair, Pair)` is not visibly component-wise (each field of the result the same field of the operands, combined by that operator)"));
+
+    [Fact]
+    public Task DescendingLoopFromAnArrayDimensionIsAnalyzed() =>
+        // Where a loop of one variable starts does not matter to the balance; the start `GetLength(0) - 2`
+        // (a call the checker cannot see into) once made the update not analyzed.
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Sweep
+            {
+                [ConservativeUpdate]
+                public static void Rate(double[,] f, double[,] r, double dx)
+                {
+                    for (int i = r.GetLength(0) - 2; i >= 0; i--)
+                        for (int j = 0; j < r.GetLength(1); j++)
+                            r[i, j] = -(f[i + 1, j] - f[i, j]) / dx;
+                }
+            }
+            """);
 }
