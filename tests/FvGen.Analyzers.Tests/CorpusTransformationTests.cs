@@ -33,7 +33,7 @@ namespace FvGen.Analyzers.Tests;
 /// </remarks>
 public sealed class CorpusTransformationTests
 {
-    private static readonly Dictionary<string, Func<string, string>> Transformations = new(StringComparer.Ordinal)
+    internal static readonly Dictionary<string, Func<string, string>> Transformations = new(StringComparer.Ordinal)
     {
         ["reindexed by 9"] = source => IterationShift.Apply(source, 9),
         ["reindexed by -10"] = source => IterationShift.Apply(source, -10),
