@@ -146,10 +146,10 @@ internal static class BalanceChecker
 
         // Writing a neighbour of the loop's cell (r[i - 1]) is the half of a face loop that was kept:
         // lone face terms, each given to that one cell. A term with counterparts that do not cancel,
-        // or two lone terms that are one face evaluated two ways, say it is the cell's own update at an
-        // offset subscript (r[i + ng] in an array with ghost cells), read as any other.
-        if (writes[0].Subscripts.SelectMany(g => g).OfType<AffineSubscript>().Any(a => !a.Index.IsConstant && !a.Index.Constant.IsZero)
-            && AreLoneFaceTerms(unbalanced))
+        // two lone terms that are one face evaluated two ways, or a target further off than a
+        // neighbour (r[i + ng] in an array with ghost cells) say it is the cell's own update at an
+        // offset subscript, read as any other.
+        if (IsNeighbourOfTheIndex(writes[0]) && AreLoneFaceTerms(unbalanced))
         {
             foreach (var c in unbalanced)
             {
@@ -694,6 +694,34 @@ internal static class BalanceChecker
         }
 
         return true;
+    }
+
+    /// <summary>
+    /// True when the write goes to a neighbour of the loop's index: some subscript moved by one
+    /// (<c>r[i - 1]</c>, <c>r[i, j + 1]</c>), none by more or by a symbol.
+    /// </summary>
+    private static bool IsNeighbourOfTheIndex(UpdateWrite write)
+    {
+        bool moved = false;
+        foreach (var group in write.Subscripts)
+        {
+            foreach (var subscript in group)
+            {
+                if (subscript is not AffineSubscript { Index: { IsConstant: false } index } || index.Constant.IsZero)
+                {
+                    continue;
+                }
+
+                if (!index.Constant.IsConstant || index.Constant.ConstantValue.Abs() != Rational.One)
+                {
+                    return false;
+                }
+
+                moved = true;
+            }
+        }
+
+        return moved;
     }
 
     /// <summary>True when every class holds one term and no two of them are one face evaluated two ways.</summary>
