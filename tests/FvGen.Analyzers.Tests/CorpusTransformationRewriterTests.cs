@@ -111,4 +111,26 @@ public sealed class CorpusTransformationRewriterTests
         Assert.True(reversed.Contains("r[i] = u[i + 1] - u[i];"), reversed);
         Assert.True(reversed.Contains("for (int j = 0; j < 4; j += 2)"), reversed);
     }
+
+    [Fact]
+    public void SplitsSumsThatDoNotReadTheirTarget()
+    {
+        var source = """
+            class C
+            {
+                void M(double[] u, double[] r, double[] f, double dx)
+                {
+                    for (int i = 1; i < u.Length - 1; i++)
+                    {
+                        r[i] = (f[i + 1] - f[i]) / dx + u[i];
+                        u[i] = u[i] - (u[i] - u[i - 1]);
+                    }
+                }
+            }
+            """;
+        var split = SplitWrites.Apply(source);
+        Assert.True(split.Contains("r[i] = (f[i + 1] - f[i]) / dx;"), split);
+        Assert.True(split.Contains("r[i] += u[i];"), split);
+        Assert.True(split.Contains("u[i] = u[i] - (u[i] - u[i - 1]);"), split);
+    }
 }

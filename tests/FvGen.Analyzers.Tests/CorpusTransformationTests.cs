@@ -19,6 +19,8 @@ namespace FvGen.Analyzers.Tests;
 /// into a local first.</item>
 /// <item><b>reversed</b> (<see cref="ReversedLoops"/>): every counted loop run from its last
 /// iteration to its first.</item>
+/// <item><b>split</b> (<see cref="SplitWrites"/>): every element write of a sum or difference made
+/// as two writes, <c>r[i] = a; r[i] -= b;</c>.</item>
 /// </list>
 /// </summary>
 /// <remarks>
@@ -42,6 +44,7 @@ public sealed class CorpusTransformationTests
         ["renamed"] = ReversedNames.Apply,
         ["extracted"] = ExtractedValues.Apply,
         ["reversed"] = ReversedLoops.Apply,
+        ["split"] = SplitWrites.Apply,
     };
 
     /// <summary>Corpus kernels that gather a cell's faces from its face list (see the remarks).</summary>

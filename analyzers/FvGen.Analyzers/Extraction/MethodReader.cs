@@ -336,6 +336,7 @@ internal static class MethodReader
         var written = new HashSet<string>(System.StringComparer.Ordinal);
         var read = new HashSet<string>(System.StringComparer.Ordinal);
         bool onlyAssigned = true;
+        var assignedElements = new HashSet<string>(System.StringComparer.Ordinal);
         var targets = new HashSet<IOperation>();
         foreach (var op in method.Operations.Descendants(loop))
         {
@@ -350,7 +351,18 @@ internal static class MethodReader
             {
                 written.Add(root);
                 targets.Add(target);
-                onlyAssigned &= op is ISimpleAssignmentOperation;
+
+                // A compound write to an element this loop assigned before it (`s[i] = a; s[i] += b;`)
+                // still only fills the element with a value of this iteration.
+                string element = target.Syntax.ToString();
+                if (op is ISimpleAssignmentOperation)
+                {
+                    assignedElements.Add(element);
+                }
+                else
+                {
+                    onlyAssigned &= assignedElements.Contains(element);
+                }
 
                 // `flux[f].Density = …` writes the element `flux[f]`; it does not read it.
                 for (var t = target; t is IFieldReferenceOperation { Instance: { } instance }; t = instance)

@@ -114,4 +114,34 @@ public sealed class DroppedFaceTermTests
             """,
             VerifyCS.Diagnostic(DiagnosticIds.DroppedFaceTerm).WithLocation(0)
                 .WithArguments("f[i + 1]", "leaves", "i", "-1/dx", "receives", "i", "+ f[i] / dx"));
+
+    [Fact]
+    public Task SlopesFilledByAnAssignmentAndACompoundWriteAreData() =>
+        // `slope[i] = a; slope[i] += b;` fills each slope with one value of its iteration, like one
+        // assignment: the slopes are data for the face states, not an update to balance.
+        VerifyCS.VerifyAnalyzerAsync(
+            """
+            static class Muscl
+            {
+                [ConservativeUpdate]
+                public static void Rate(double[] c, double[] rate, double velocity, double dx)
+                {
+                    int n = c.Length;
+                    var slope = new double[n];
+                    var flux = new double[n + 1];
+                    for (int i = 1; i < n - 1; i++)
+                    {
+                        double a = c[i] - c[i - 1], b = c[i + 1] - c[i];
+                        slope[i] = Math.Max(0.0, Math.Min(a, b));
+                        slope[i] += Math.Min(0.0, Math.Max(a, b));
+                    }
+
+                    for (int f = 1; f < n; f++)
+                        flux[f] = velocity * (c[f - 1] + 0.5 * slope[f - 1]);
+
+                    for (int i = 1; i < n - 1; i++)
+                        rate[i] = (flux[i] - flux[i + 1]) / dx;
+                }
+            }
+            """);
 }
