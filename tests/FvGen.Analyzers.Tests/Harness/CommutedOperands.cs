@@ -1,4 +1,3 @@
-using FvGen.Analyzers.Tests.Verifiers;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
@@ -12,7 +11,7 @@ namespace FvGen.Analyzers.Tests.Harness;
 /// the same; a reading that depended on which operand comes first would show. Operators of user
 /// types (state structs, vectors) are left as written: they need not commute.
 /// </summary>
-internal sealed class CommutedOperands : CSharpSyntaxRewriter
+internal sealed class CommutedOperands : SourceRewriter
 {
     private readonly SemanticModel _model;
 
@@ -20,9 +19,8 @@ internal sealed class CommutedOperands : CSharpSyntaxRewriter
 
     public static string Apply(string source)
     {
-        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest));
-        var compilation = CSharpCompilation.Create("Commuted", [tree], TestReferences.All, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
-        return new CommutedOperands(compilation.GetSemanticModel(tree)).Visit(tree.GetRoot()).ToFullString();
+        var tree = Parse(source);
+        return new CommutedOperands(ModelOf(tree)).Rewrite(tree);
     }
 
     public override SyntaxNode? VisitBinaryExpression(BinaryExpressionSyntax node)

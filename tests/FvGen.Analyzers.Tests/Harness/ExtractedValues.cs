@@ -9,14 +9,14 @@ namespace FvGen.Analyzers.Tests.Harness;
 /// <c>r[i] = -(a - b) / dx;</c> becomes <c>{ var extracted1 = -(a - b) / dx; r[i] = extracted1; }</c>
 /// (compound writes too). The checker inlines locals, so every verdict must stay the same.
 /// </summary>
-internal sealed class ExtractedValues : CSharpSyntaxRewriter
+internal sealed class ExtractedValues : SourceRewriter
 {
     private int _count;
 
     public static string Apply(string source)
     {
-        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest));
-        return new ExtractedValues().Visit(tree.GetRoot()).ToFullString();
+        var tree = Parse(source);
+        return new ExtractedValues().Rewrite(tree);
     }
 
     public override SyntaxNode? VisitExpressionStatement(ExpressionStatementSyntax node)

@@ -12,7 +12,7 @@ namespace FvGen.Analyzers.Tests.Harness;
 /// stays the same slip. Loops over index lists and loops starting elsewhere (a cell's range of a
 /// face list) are left as written.
 /// </summary>
-internal sealed class IterationShift : CSharpSyntaxRewriter
+internal sealed class IterationShift : SourceRewriter
 {
     private readonly int _k;
     private readonly HashSet<string> _variables = new(StringComparer.Ordinal);
@@ -21,8 +21,8 @@ internal sealed class IterationShift : CSharpSyntaxRewriter
 
     public static string Apply(string source, int k)
     {
-        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest));
-        return new IterationShift(k).Visit(tree.GetRoot()).ToFullString();
+        var tree = Parse(source);
+        return new IterationShift(k).Rewrite(tree);
     }
 
     public override SyntaxNode? VisitForStatement(ForStatementSyntax node)

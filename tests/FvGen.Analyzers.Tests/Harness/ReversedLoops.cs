@@ -10,12 +10,12 @@ namespace FvGen.Analyzers.Tests.Harness;
 /// that reads only the old state computes the same thing, so every verdict must stay the same (an
 /// in-place sweep is one in either direction).
 /// </summary>
-internal sealed class ReversedLoops : CSharpSyntaxRewriter
+internal sealed class ReversedLoops : SourceRewriter
 {
     public static string Apply(string source)
     {
-        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest));
-        return new ReversedLoops().Visit(tree.GetRoot()).ToFullString();
+        var tree = Parse(source);
+        return new ReversedLoops().Rewrite(tree);
     }
 
     public override SyntaxNode? VisitForStatement(ForStatementSyntax node)

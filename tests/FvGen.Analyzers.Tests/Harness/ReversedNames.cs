@@ -1,4 +1,3 @@
-using FvGen.Analyzers.Tests.Verifiers;
 using Microsoft.CodeAnalysis;
 using Microsoft.CodeAnalysis.CSharp;
 using Microsoft.CodeAnalysis.CSharp.Syntax;
@@ -11,7 +10,7 @@ namespace FvGen.Analyzers.Tests.Harness;
 /// arrays and symbols by name, so this reverses every order those keys give; verdicts must not
 /// change. Types, members, methods and the runtime's API keep their names.
 /// </summary>
-internal sealed class ReversedNames : CSharpSyntaxRewriter
+internal sealed class ReversedNames : SourceRewriter
 {
     private readonly SemanticModel _model;
     private readonly Dictionary<string, string> _names;
@@ -24,9 +23,8 @@ internal sealed class ReversedNames : CSharpSyntaxRewriter
 
     public static string Apply(string source)
     {
-        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest));
-        var compilation = CSharpCompilation.Create("Renamed", [tree], TestReferences.All, new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
-        var model = compilation.GetSemanticModel(tree);
+        var tree = Parse(source);
+        var model = ModelOf(tree);
         var declared = tree.GetRoot().DescendantNodes()
             .Select(n => model.GetDeclaredSymbol(n))
             .Where(s => s is ILocalSymbol or IParameterSymbol)
@@ -41,7 +39,7 @@ internal sealed class ReversedNames : CSharpSyntaxRewriter
             names[declared[k]] = "v" + (declared.Count - k).ToString("D3", System.Globalization.CultureInfo.InvariantCulture);
         }
 
-        return new ReversedNames(model, names).Visit(tree.GetRoot()).ToFullString();
+        return new ReversedNames(model, names).Rewrite(tree);
     }
 
     public override SyntaxNode? VisitIdentifierName(IdentifierNameSyntax node) =>

@@ -9,12 +9,12 @@ namespace FvGen.Analyzers.Tests.Harness;
 /// <c>r[i] = a; r[i] -= b;</c>, when <c>b</c> does not read the array written (it would then see the
 /// first half). The element ends with the same value, so every verdict must stay the same.
 /// </summary>
-internal sealed class SplitWrites : CSharpSyntaxRewriter
+internal sealed class SplitWrites : SourceRewriter
 {
     public static string Apply(string source)
     {
-        var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest));
-        return new SplitWrites().Visit(tree.GetRoot()).ToFullString();
+        var tree = Parse(source);
+        return new SplitWrites().Rewrite(tree);
     }
 
     public override SyntaxNode? VisitExpressionStatement(ExpressionStatementSyntax node)
