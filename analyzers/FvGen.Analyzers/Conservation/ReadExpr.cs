@@ -74,6 +74,8 @@ internal sealed class ReadExpr : Expr
 
     public override Expr Shift(IReadOnlyDictionary<string, long> shift)
     {
+        // Shifted.Each over the groups, written out: the groups are structs, and a generic helper over
+        // them would be one more value-type instantiation for the JIT in every compiler process.
         ImmutableArray<IndexTerm>[]? moved = null;
         for (int k = 0; k < Subscripts.Length; k++)
         {

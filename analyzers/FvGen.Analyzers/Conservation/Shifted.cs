@@ -18,26 +18,23 @@ internal static class Shifted
     public static ImmutableArray<T> Each<T>(ImmutableArray<T> items, IReadOnlyDictionary<string, long> shift, Func<T, IReadOnlyDictionary<string, long>, T> shiftOne)
         where T : class
     {
-        T[]? moved = null;
+        ImmutableArray<T>.Builder? moved = null;
         for (int k = 0; k < items.Length; k++)
         {
             var item = items[k];
             var shifted = shiftOne(item, shift);
             if (moved is null && !ReferenceEquals(shifted, item))
             {
-                moved = new T[items.Length];
+                moved = ImmutableArray.CreateBuilder<T>(items.Length);
                 for (int before = 0; before < k; before++)
                 {
-                    moved[before] = items[before];
+                    moved.Add(items[before]);
                 }
             }
 
-            if (moved is not null)
-            {
-                moved[k] = shifted;
-            }
+            moved?.Add(shifted);
         }
 
-        return moved is null ? items : ImmutableArray.Create(moved);
+        return moved is null ? items : moved.MoveToImmutable();
     }
 }

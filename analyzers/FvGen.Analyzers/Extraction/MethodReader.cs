@@ -336,7 +336,7 @@ internal static class MethodReader
         var written = new HashSet<string>(System.StringComparer.Ordinal);
         var read = new HashSet<string>(System.StringComparer.Ordinal);
         bool onlyAssigned = true;
-        var assignedElements = new HashSet<string>(System.StringComparer.Ordinal);
+        var assignedElements = new List<SyntaxNode>();
         var targets = new HashSet<IOperation>();
         foreach (var op in method.Operations.Descendants(loop))
         {
@@ -354,14 +354,14 @@ internal static class MethodReader
 
                 // A compound write to an element this loop assigned before it (`s[i] = a; s[i] += b;`)
                 // still only fills the element with a value of this iteration.
-                string element = target.Syntax.ToString();
+                // (Compared as syntax, and only when a compound write comes: most loops have none.)
                 if (op is ISimpleAssignmentOperation)
                 {
-                    assignedElements.Add(element);
+                    assignedElements.Add(target.Syntax);
                 }
-                else
+                else if (onlyAssigned)
                 {
-                    onlyAssigned &= assignedElements.Contains(element);
+                    onlyAssigned = assignedElements.Exists(e => Microsoft.CodeAnalysis.CSharp.SyntaxFactory.AreEquivalent(e, target.Syntax));
                 }
 
                 // `flux[f].Density = …` writes the element `flux[f]`; it does not read it.
