@@ -5,9 +5,11 @@
 # The analyzers are referenced as a built DLL, the way the package delivers them, so the build with
 # them does not also pay for building the analyzer project. Not part of the test run: speed is never
 # asserted. Usage at the end of these notes.
-# what: fvgen (default) measures the FvGen analyzers as built; floor measures an analyzer that
-# registers the same actions and only walks the operations (what asking for operation trees costs);
-# ready-to-run measures the FvGen analyzers precompiled with crossgen2 (restored from NuGet).
+# what: fvgen (default) measures the FvGen analyzers as a project gets them (build/FvGen.Analyzers.targets:
+# the precompiled image where MSBuild runs on .NET, see analyzers/FvGen.Analyzers/Precompile.targets);
+# il measures the IL DLL alone (what the .NET Framework MSBuild of Visual Studio loads); floor measures
+# an analyzer that registers the same actions and only walks the operations (what asking for
+# operation trees costs).
 # compiler: fresh (default) starts a new compiler process for every build (UseSharedCompilation=false,
 # what this machine's environment sets), so the analyzers are loaded and JIT-compiled in every build;
 # server uses the SDK's shared compiler server (the SDK's own default and what an IDE's long-lived
@@ -40,6 +42,7 @@ done
 dotnet build "$REPO/analyzers/FvGen.Analyzers/FvGen.Analyzers.csproj" -c Release > /dev/null
 ANALYZER="$REPO/analyzers/FvGen.Analyzers/bin/Release/netstandard2.0/FvGen.Analyzers.dll"
 NAME="FvGen.Analyzers"
+USE_IMAGE=true
 case "$WHAT" in
   fvgen) ;;
   floor)
@@ -47,27 +50,8 @@ case "$WHAT" in
     ANALYZER="$REPO/benchmarks/FvGen.Benchmarks.AnalyzerFloor/bin/Release/netstandard2.0/FvGen.Benchmarks.AnalyzerFloor.dll"
     NAME="FvGen.Benchmarks.AnalyzerFloor"
     ;;
-  ready-to-run)
-    # crossgen2 of the running runtime's version, against that runtime and the SDK's own compiler.
-    RUNTIME=$(dotnet --list-runtimes | awk '$1 == "Microsoft.NETCore.App" { v = $2; p = $3 } END { gsub(/[][]/, "", p); print v "|" p }')
-    VERSION="${RUNTIME%%|*}"
-    FRAMEWORK="${RUNTIME#*|}/$VERSION"
-    SDK=$(dotnet --list-sdks | tail -1 | awk '{ v = $1; p = $2; gsub(/[][]/, "", p); print p "/" v }')
-    RID=$(dotnet --info | awk '/RID:/ { print $2; exit }')
-    mkdir -p "$WORK/crossgen"
-    cat > "$WORK/crossgen/Crossgen.csproj" <<XML
-<Project Sdk="Microsoft.NET.Sdk">
-  <PropertyGroup><TargetFramework>net10.0</TargetFramework><ManagePackageVersionsCentrally>false</ManagePackageVersionsCentrally><ImportDirectoryBuildProps>false</ImportDirectoryBuildProps></PropertyGroup>
-  <ItemGroup><PackageDownload Include="Microsoft.NETCore.App.Crossgen2.$RID" Version="[$VERSION]" /></ItemGroup>
-</Project>
-XML
-    dotnet restore "$WORK/crossgen/Crossgen.csproj" > /dev/null
-    CROSSGEN="$(dotnet nuget locals global-packages --list | awk '{ print $NF }')/microsoft.netcore.app.crossgen2.$RID/$VERSION/tools/crossgen2"
-    "$CROSSGEN" "$ANALYZER" -o "$WORK/crossgen/FvGen.Analyzers.dll" -O --targetos "${RID%-*}" --targetarch "${RID#*-}" \
-      -r "$FRAMEWORK/*.dll" -r "$SDK/Roslyn/bincore/Microsoft.CodeAnalysis.dll" -r "$SDK/Roslyn/bincore/Microsoft.CodeAnalysis.CSharp.dll" > /dev/null
-    ANALYZER="$WORK/crossgen/FvGen.Analyzers.dll"
-    ;;
-  *) echo "unknown analyzer to measure: $WHAT (fvgen, floor or ready-to-run)" >&2; exit 2 ;;
+  il) USE_IMAGE=false ;;
+  *) echo "unknown analyzer to measure: $WHAT (fvgen, il or floor)" >&2; exit 2 ;;
 esac
 echo "measuring $ANALYZER"
 cat > "$WORK/Bench.csproj" <<XML
@@ -80,11 +64,13 @@ cat > "$WORK/Bench.csproj" <<XML
     <NoWarn>\$(NoWarn);CS0169;CS0649;CS8618</NoWarn>
     <ManagePackageVersionsCentrally>false</ManagePackageVersionsCentrally>
     <ImportDirectoryBuildProps>false</ImportDirectoryBuildProps>
+    <FvGenUsePrecompiledAnalyzer>$USE_IMAGE</FvGenUsePrecompiledAnalyzer>
   </PropertyGroup>
   <ItemGroup>
     <ProjectReference Include="$REPO/runtime/FvGen.Runtime/FvGen.Runtime.csproj" />
     <Analyzer Include="$ANALYZER" Condition="'\$(WithFvGenAnalyzers)' == 'true'" />
   </ItemGroup>
+  <Import Project="$REPO/analyzers/FvGen.Analyzers/build/FvGen.Analyzers.targets" />
 </Project>
 XML
 cd "$WORK"

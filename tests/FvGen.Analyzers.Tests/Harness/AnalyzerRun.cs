@@ -19,7 +19,7 @@ internal static class AnalyzerRun
         public IEnumerable<Diagnostic> CompilerErrors => Compiler.Where(d => d.Severity == DiagnosticSeverity.Error);
     }
 
-    public static Task<Result> RunAsync(string source)
+    public static Task<Result> RunAsync(string source, DiagnosticAnalyzer[]? analyzers = null)
     {
         var tree = CSharpSyntaxTree.ParseText(source, new CSharpParseOptions(LanguageVersion.Latest), path: "/0/Kernel.cs");
         var compilation = CSharpCompilation.Create(
@@ -27,11 +27,14 @@ internal static class AnalyzerRun
             [tree],
             TestReferences.All,
             new CSharpCompilationOptions(OutputKind.DynamicallyLinkedLibrary, allowUnsafe: true));
-        return RunAsync(compilation);
+        return RunAsync(compilation, analyzers: analyzers);
     }
 
-    /// <summary>Runs the rules on <paramref name="compilation"/>; <paramref name="allMethods"/> sets the .editorconfig key that widens the scope to every method.</summary>
-    public static async Task<Result> RunAsync(Compilation compilation, bool allMethods = false)
+    /// <summary>
+    /// Runs the rules on <paramref name="compilation"/>; <paramref name="allMethods"/> sets the .editorconfig key that widens
+    /// the scope to every method; <paramref name="analyzers"/> replaces the analyzers of this build (another copy of them).
+    /// </summary>
+    public static async Task<Result> RunAsync(Compilation compilation, bool allMethods = false, DiagnosticAnalyzer[]? analyzers = null)
     {
         var exceptions = new List<Exception>();
         var analyzerOptions = allMethods
@@ -42,7 +45,7 @@ internal static class AnalyzerRun
             (e, _, _) => { lock (exceptions) { exceptions.Add(e); } },
             concurrentAnalysis: false,
             logAnalyzerExecutionTime: false);
-        var withAnalyzers = compilation.WithAnalyzers([.. AllRules.Analyzers()], options);
+        var withAnalyzers = compilation.WithAnalyzers([.. analyzers ?? AllRules.Analyzers()], options);
         var analyzer = await withAnalyzers.GetAnalyzerDiagnosticsAsync();
         return new Result(compilation.GetDiagnostics(), analyzer, exceptions);
     }

@@ -1,0 +1,21 @@
+using System.Reflection;
+
+namespace FvGen.Analyzers.Tests.Precompiled;
+
+/// <summary>
+/// Where this build put the precompiled analyzer (analyzers/FvGen.Analyzers/Precompile.targets) and whether it
+/// was asked to make one, as the test project's build recorded them.
+/// </summary>
+internal static class PrecompiledImage
+{
+    public static bool Expected => Metadata("FvGen.PrecompiledAnalyzerExpected") == "true";
+
+    public static string Path => Metadata("FvGen.PrecompiledAnalyzerPath");
+
+    public static string SelectionTargets => Metadata("FvGen.AnalyzerSelectionTargets");
+
+    private static string Metadata(string key) =>
+        typeof(PrecompiledImage).Assembly.GetCustomAttributes<AssemblyMetadataAttribute>()
+            .SingleOrDefault(a => a.Key == key)?.Value
+        ?? throw new InvalidOperationException($"the test assembly carries no '{key}' metadata: see FvGen.Analyzers.Tests.csproj");
+}
