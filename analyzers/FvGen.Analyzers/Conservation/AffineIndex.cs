@@ -155,38 +155,24 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     /// <summary>C# text, variables first: <c>j * (nx + 1) + i + 1</c>.</summary>
     public override string ToString()
     {
-        var parts = new List<(int Sign, string Text)>();
-        foreach (var l in Linear.Reverse())
+        var sb = new StringBuilder();
+        for (int k = Linear.Length - 1; k >= 0; k--)
         {
-            parts.Add(Scaled(l.Value, l.Key));
+            var (sign, text) = Scaled(Linear[k].Value, Linear[k].Key);
+            AppendSigned(sb, sign, text);
         }
 
         foreach (var t in Constant.Terms)
         {
             var single = SymPoly.Of(new[] { new KeyValuePair<Monomial, Rational>(t.Key, t.Value.Abs()) });
-            parts.Add((t.Value.Sign, CSharpText.Of(single)));
+            AppendSigned(sb, t.Value.Sign, CSharpText.Of(single));
         }
 
-        if (parts.Count == 0)
-        {
-            return "0";
-        }
-
-        var sb = new StringBuilder();
-        for (int k = 0; k < parts.Count; k++)
-        {
-            if (k == 0)
-            {
-                sb.Append(parts[k].Sign < 0 ? "-" : string.Empty).Append(parts[k].Text);
-            }
-            else
-            {
-                sb.Append(parts[k].Sign < 0 ? " - " : " + ").Append(parts[k].Text);
-            }
-        }
-
-        return sb.ToString();
+        return sb.Length == 0 ? "0" : sb.ToString();
     }
+
+    private static void AppendSigned(StringBuilder sb, int sign, string text) =>
+        sb.Append(sb.Length == 0 ? (sign < 0 ? "-" : string.Empty) : (sign < 0 ? " - " : " + ")).Append(text);
 
     private static (int Sign, string Text) Scaled(SymPoly coefficient, string variable)
     {

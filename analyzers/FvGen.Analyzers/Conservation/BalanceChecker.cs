@@ -74,9 +74,9 @@ internal static class BalanceChecker
         }
 
         bool assignment = live.Any(w => w.IsAssignment);
-        var measured = live.Select(w => (Write: w, Value: MeasureWeighted(w))).ToList();
-        var terms = measured.SelectMany(m => m.Value.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, m.Write))).ToList();
-        var measures = new HashSet<string>(measured.Where(m => m.Value.Measure is not null).Select(m => m.Value.Measure!.Key), StringComparer.Ordinal);
+        var measured = live.Select(MeasureWeighted).ToList();
+        var terms = measured.SelectMany(m => m.Sum.Terms.Where(t => !t.IsInvariant).Select(t => new AttributedTerm(t, m.Write))).ToList();
+        var measures = new HashSet<string>(measured.Where(m => m.Measure is not null).Select(m => m.Measure!.Key), StringComparer.Ordinal);
         var classes = ShiftClass.Build(terms, space);
         bool mapped = writes[0].Subscripts.SelectMany(g => g).Any(s => s is MappedSubscript);
 
@@ -296,7 +296,7 @@ internal static class BalanceChecker
         foreach (var c in ShiftClass.Build(terms, space))
         {
             var sum = c.Sum;
-            var cells = c.Members.Select(m => (Member: m, Cell: CellKey(m))).ToList();
+            var cells = c.Members.Select(m => new MemberCell(m, CellKey(m))).ToList();
             if (!sum.IsZero)
             {
                 var byCell = cells.GroupBy(x => x.Cell).Select(g => g.First().Member.Source.Write.RenderTarget() + " with weight " + g.Aggregate(SymPoly.Zero, (s, x) => s + x.Member.Weight)).ToList();
@@ -575,7 +575,7 @@ internal static class BalanceChecker
 
                 foreach (var t in target.Where(t => t.LinearKey == part.LinearKey))
                 {
-                    var n = ShiftMatcher.Solve(new[] { (t, part) }, space);
+                    var n = ShiftMatcher.Solve(new[] { new IndexPair(t, part) }, space);
                     if (n is null)
                     {
                         continue;
@@ -623,7 +623,7 @@ internal static class BalanceChecker
         {
             foreach (var t in target.Where(t => t.LinearKey == part.LinearKey))
             {
-                var n = ShiftMatcher.Solve(new[] { (t, part) }, space);
+                var n = ShiftMatcher.Solve(new[] { new IndexPair(t, part) }, space);
                 if (n is not null)
                 {
                     best = Math.Max(best, n.Values.Sum());
@@ -822,17 +822,17 @@ internal static class BalanceChecker
     /// indexed like one target (the face area <c>width[i]</c> of a row of faces whose right cell is
     /// <c>i</c>) is part of the flux, not a measure.
     /// </summary>
-    private static List<(UpdateWrite Write, SumExpr Sum)> FaceLoopWeighted(List<UpdateWrite> writes)
+    private static List<MeasuredWrite> FaceLoopWeighted(List<UpdateWrite> writes)
     {
-        var weighted = writes.Select(w => (Write: w, Weighted: MeasureWeighted(w))).ToList();
-        var inverseArrays = weighted.Select(x => x.Weighted.Measure is ReciprocalExpr r ? "1/" + string.Join(",", r.Denominator.Reads.Select(read => read.Array + read.Path)) : string.Empty).Distinct(StringComparer.Ordinal).ToList();
+        var weighted = writes.Select(MeasureWeighted).ToList();
+        var inverseArrays = weighted.Select(x => x.Measure is ReciprocalExpr r ? "1/" + string.Join(",", r.Denominator.Reads.Select(read => read.Array + read.Path)) : string.Empty).Distinct(StringComparer.Ordinal).ToList();
         bool inverseConsistent = inverseArrays.Count == 1;
         return weighted
-            .Select(x => (x.Write, x.Weighted.Measure is ReciprocalExpr && !inverseConsistent ? x.Write.Value : x.Weighted.Sum))
+            .Select(x => x.Measure is ReciprocalExpr && !inverseConsistent ? new MeasuredWrite(x.Write, x.Write.Value, null) : x)
             .ToList();
     }
 
-    private static (SumExpr Sum, Expr? Measure) MeasureWeighted(UpdateWrite write)
+    private static MeasuredWrite MeasureWeighted(UpdateWrite write)
     {
         ReciprocalExpr? divisor = null;
         foreach (var t in write.Value.Terms)
@@ -871,7 +871,7 @@ internal static class BalanceChecker
 
             return new Term(t.Coefficient, factors, t.Origins);
         });
-        return (SumExpr.Of(weighted), measure);
+        return new MeasuredWrite(write, SumExpr.Of(weighted), measure);
     }
 
     /// <summary>
@@ -880,14 +880,14 @@ internal static class BalanceChecker
     /// <c>u[i] * (u[i + 1] - u[i - 1])</c> is not mistaken for one). The conserved total is then
     /// Σ value / factor, and the factor is divided out.
     /// </summary>
-    private static (SumExpr Sum, Expr? Measure) InverseMeasureWeighted(UpdateWrite write)
+    private static MeasuredWrite InverseMeasureWeighted(UpdateWrite write)
     {
         var targetKeys = write.TargetSubscriptKeys;
         bool ReachesBeyond(Term t) => t.Reads.Any(r => r.Role != DataRole.Cell || !AllIn(r.AllSubscripts, targetKeys));
         var beyond = write.Value.Terms.Where(ReachesBeyond).ToList();
         if (beyond.Count == 0)
         {
-            return (write.Value, null);
+            return new MeasuredWrite(write, write.Value, null);
         }
 
         var candidate = beyond[0].Factors.OfType<ReadExpr>().FirstOrDefault(w =>
@@ -896,7 +896,7 @@ internal static class BalanceChecker
             && write.Value.Terms.All(t => t.Reads.All(r => r.Array != w.Array || r.Key == w.Key)));
         if (candidate is null)
         {
-            return (write.Value, null);
+            return new MeasuredWrite(write, write.Value, null);
         }
 
         var inverse = new ReciprocalExpr(SumExpr.Factor(candidate).StripOrigins());
@@ -915,7 +915,7 @@ internal static class BalanceChecker
 
             return new Term(t.Coefficient, factors, t.Origins);
         });
-        return (SumExpr.Of(weighted), inverse);
+        return new MeasuredWrite(write, SumExpr.Of(weighted), inverse);
     }
 
     private static bool IsTargetElement(ReadExpr read, UpdateWrite write) =>
@@ -965,4 +965,7 @@ internal static class BalanceChecker
 
         return text.ToString();
     }
+
+    /// <summary>A class member and the cell it updates (a class, not a tuple, for the reason given at <see cref="MeasuredWrite"/>).</summary>
+    private sealed record MemberCell(ClassMember Member, string Cell);
 }

@@ -26,7 +26,7 @@ internal sealed class IndexPairChain
     public int Count { get; }
 
     /// <summary>This chain followed by <paramref name="pairs"/>, in their order.</summary>
-    public IndexPairChain Extend(List<(AffineIndex, AffineIndex)> pairs)
+    public IndexPairChain Extend(List<IndexPair> pairs)
     {
         var chain = this;
         foreach (var (a, b) in pairs)
@@ -38,13 +38,13 @@ internal sealed class IndexPairChain
     }
 
     /// <summary>The pairs in the order they were added.</summary>
-    public (AffineIndex A, AffineIndex B)[] ToArray()
+    public IndexPair[] ToArray()
     {
-        var result = new (AffineIndex A, AffineIndex B)[Count];
+        var result = new IndexPair[Count];
         int k = Count;
         for (var link = this; link.Count > 0; link = link._rest!)
         {
-            result[--k] = (link._a!, link._b!);
+            result[--k] = new IndexPair(link._a!, link._b!);
         }
 
         return result;

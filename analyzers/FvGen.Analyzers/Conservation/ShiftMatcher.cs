@@ -83,7 +83,7 @@ internal static class ShiftMatcher
 
         // Many reads of B share A's first read's shape (u[•] in a limiter); each distinct shift is tried once.
         var tried = new HashSet<string>(StringComparer.Ordinal);
-        var pairs = new List<(AffineIndex, AffineIndex)>();
+        var pairs = new List<IndexPair>();
         foreach (var candidate in b.Reads)
         {
             if (candidate.ShapeKey != first.ShapeKey || !tried.Add(candidate.Key))
@@ -121,7 +121,7 @@ internal static class ShiftMatcher
     };
 
     /// <summary>The integer shift vector that maps every first index of a pair onto its second, or null.</summary>
-    public static IReadOnlyDictionary<string, long>? Solve(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    public static IReadOnlyDictionary<string, long>? Solve(IReadOnlyList<IndexPair> pairs, LoopSpace space)
     {
         if (AllConstant(pairs))
         {
@@ -164,7 +164,7 @@ internal static class ShiftMatcher
     }
 
     /// <summary>True when no index of any pair carries a symbol: each pair then gives one row of plain numbers.</summary>
-    private static bool AllConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs)
+    private static bool AllConstant(IReadOnlyList<IndexPair> pairs)
     {
         for (int n = 0; n < pairs.Count; n++)
         {
@@ -212,7 +212,7 @@ internal static class ShiftMatcher
     }
 
     /// <summary>The same system when no index carries a symbol (the common case): one row per pair.</summary>
-    private static IReadOnlyDictionary<string, long>? SolveConstant(IReadOnlyList<(AffineIndex A, AffineIndex B)> pairs, LoopSpace space)
+    private static IReadOnlyDictionary<string, long>? SolveConstant(IReadOnlyList<IndexPair> pairs, LoopSpace space)
     {
         var unknowns = space.LatticeVariables;
         var rows = new List<Rational[]>(pairs.Count);
@@ -336,7 +336,7 @@ internal static class ShiftMatcher
     }
 
     /// <summary>The index pairs of two reads of one array, into <paramref name="pairs"/>; false when their subscripts cannot correspond.</summary>
-    private static bool PairReads(ReadExpr x, ReadExpr y, List<(AffineIndex, AffineIndex)> pairs)
+    private static bool PairReads(ReadExpr x, ReadExpr y, List<IndexPair> pairs)
     {
         if (x.Array != y.Array || x.Path != y.Path || x.Subscripts.Length != y.Subscripts.Length)
         {
@@ -357,12 +357,12 @@ internal static class ShiftMatcher
                 switch (gx[k], gy[k])
                 {
                     case (AffineSubscript ax, AffineSubscript ay):
-                        pairs.Add((ax.Index, ay.Index));
+                        pairs.Add(new IndexPair(ax.Index, ay.Index));
                         break;
                     case (MappedSubscript mx, MappedSubscript my) when mx.Map == my.Map && mx.Arguments.Length == my.Arguments.Length:
                         for (int n = 0; n < mx.Arguments.Length; n++)
                         {
-                            pairs.Add((mx.Arguments[n], my.Arguments[n]));
+                            pairs.Add(new IndexPair(mx.Arguments[n], my.Arguments[n]));
                         }
 
                         break;
@@ -377,7 +377,7 @@ internal static class ShiftMatcher
 
     private static IndexPairChain? MatchReads(ReadExpr x, ReadExpr y, IndexPairChain acc)
     {
-        var pairs = new List<(AffineIndex, AffineIndex)>();
+        var pairs = new List<IndexPair>();
         return PairReads(x, y, pairs) ? acc.Extend(pairs) : null;
     }
 

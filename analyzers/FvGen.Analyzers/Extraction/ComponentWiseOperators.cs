@@ -48,8 +48,12 @@ internal static class ComponentWiseOperators
         return seen.SetEquals(fields);
     }
 
+    /// <summary>A field of the operator's result and the expression it is given; field null for a constructor argument.
+    /// (A class, not a tuple: lists of it run the framework's shared precompiled code, not code JIT-compiled for a value type.)</summary>
+    private sealed record Component(string? Field, ExpressionSyntax Value);
+
     /// <summary>The (field, value) pairs the operator builds its result from; field null for a constructor argument.</summary>
-    private static List<(string? Field, ExpressionSyntax Value)>? Components(OperatorDeclarationSyntax declaration)
+    private static List<Component>? Components(OperatorDeclarationSyntax declaration)
     {
         if (declaration.ExpressionBody is { } arrow)
         {
@@ -76,7 +80,7 @@ internal static class ComponentWiseOperators
             return null;
         }
 
-        var components = new List<(string?, ExpressionSyntax)>();
+        var components = new List<Component>();
         for (int k = 1; k < statements.Count - 1; k++)
         {
             if (statements[k] is not ExpressionStatementSyntax
@@ -92,20 +96,20 @@ internal static class ComponentWiseOperators
                 return null;
             }
 
-            components.Add((name.Identifier.Text, value));
+            components.Add(new Component(name.Identifier.Text, value));
         }
 
         return components;
     }
 
-    private static List<(string? Field, ExpressionSyntax Value)>? FromCreation(ExpressionSyntax expression)
+    private static List<Component>? FromCreation(ExpressionSyntax expression)
     {
         switch (Unparenthesize(expression))
         {
             case BaseObjectCreationExpressionSyntax { Initializer: null, ArgumentList: { } arguments }:
-                return arguments.Arguments.Select(a => ((string?)null, a.Expression)).ToList();
+                return arguments.Arguments.Select(a => new Component(null, a.Expression)).ToList();
             case BaseObjectCreationExpressionSyntax { Initializer: { } initializer, ArgumentList: null or { Arguments.Count: 0 } }:
-                var components = new List<(string?, ExpressionSyntax)>();
+                var components = new List<Component>();
                 foreach (var e in initializer.Expressions)
                 {
                     if (e is not AssignmentExpressionSyntax { Left: IdentifierNameSyntax field, Right: var value })
@@ -113,7 +117,7 @@ internal static class ComponentWiseOperators
                         return null;
                     }
 
-                    components.Add((field.Identifier.Text, value));
+                    components.Add(new Component(field.Identifier.Text, value));
                 }
 
                 return components;

@@ -228,7 +228,8 @@ internal sealed partial class LoopNestReader
     /// </summary>
     private string? FacesRoot(IOperation body, ISymbol position)
     {
-        var uses = new List<(IOperation Element, string? Root, bool AsFace)>();
+        // PositionUse is a class, not a tuple, for the reason given at LoopStep.
+        var uses = new List<PositionUse>();
         foreach (var use in body.Descendants().OfType<ILocalReferenceOperation>().Where(l => SymbolEqualityComparer.Default.Equals(l.Local, position)))
         {
             var element = use.Parent is IConversionOperation c ? c.Parent : use.Parent;
@@ -254,7 +255,7 @@ internal sealed partial class LoopNestReader
 
             var parent = element?.Parent is IConversionOperation up ? up.Parent : element?.Parent;
             bool asFace = parent is IVariableInitializerOperation or IArrayElementReferenceOperation || parent is IArgumentOperation { Parent: IPropertyReferenceOperation { Property.IsIndexer: true } };
-            uses.Add((element ?? use, root, asFace));
+            uses.Add(new PositionUse(element ?? use, root, asFace));
         }
 
         if (uses.Count == 0)
@@ -265,9 +266,9 @@ internal sealed partial class LoopNestReader
         var faceRoots = uses.Where(u => u.AsFace && u.Root is not null).Select(u => u.Root).Distinct().ToList();
         string? faces = faceRoots.Count == 1 ? faceRoots[0] : uses.Select(u => u.Root).Distinct().Count() == 1 ? uses[0].Root : null;
         var stray = uses.FirstOrDefault(u => u.Root is null || u.Root != faces);
-        if (faces is null || stray.Element is not null)
+        if (faces is null || stray is not null)
         {
-            var at = (stray.Element ?? uses[0].Element).Syntax;
+            var at = (stray ?? uses[0]).Element.Syntax;
             throw new NotModelledException(
                 $"the position `{position.Name}` in the face list is read as `{ExpressionReader.Short(at)}`, not only to take the face from the list; the side of a face is read only from a comparison of the cell with a face-to-cell map",
                 at);
@@ -375,4 +376,7 @@ internal sealed partial class LoopNestReader
 
         return operation;
     }
+
+    /// <summary>A read of a face list's position variable: the element read, the list's root, whether it is used as a face.</summary>
+    private sealed record PositionUse(IOperation Element, string? Root, bool AsFace);
 }

@@ -25,6 +25,14 @@ internal sealed partial class LoopNestReader
     private bool _parallel;
     private int _depth;
 
+    // Classes, not tuples: collections of them run the framework's shared precompiled code instead of
+    // code the JIT compiles for each value-type instantiation in every fresh compiler process.
+    private sealed record LoopStep(ILocalSymbol Local, long Step);
+
+    private sealed record LoopCopy(ILocalSymbol Copy, ILocalSymbol Of, int Order);
+
+    private sealed record LocalWrite(IOperation Operation, ILocalSymbol Local);
+
     public LoopNestReader(MethodContext method, Dictionary<ISymbol, Binding> outer)
     {
         _method = method;
@@ -153,8 +161,8 @@ internal sealed partial class LoopNestReader
             }
         }
 
-        var steps = new List<(ILocalSymbol Local, long Step)>();
-        var copies = new List<(ILocalSymbol Copy, ILocalSymbol Of, int Order)>();
+        var steps = new List<LoopStep>();
+        var copies = new List<LoopCopy>();
         int order = 0;
         foreach (var bottom in loop.AtLoopBottom)
         {
@@ -162,21 +170,21 @@ internal sealed partial class LoopNestReader
             switch (op)
             {
                 case IIncrementOrDecrementOperation { Target: ILocalReferenceOperation local } step:
-                    steps.Add((local.Local, step.Kind == OperationKind.Increment ? 1 : -1));
+                    steps.Add(new LoopStep(local.Local, step.Kind == OperationKind.Increment ? 1 : -1));
                     break;
                 case ICompoundAssignmentOperation { Target: ILocalReferenceOperation local, Value.ConstantValue: { HasValue: true, Value: int c } } compound
                     when compound.OperatorKind is BinaryOperatorKind.Add or BinaryOperatorKind.Subtract:
-                    steps.Add((local.Local, compound.OperatorKind == BinaryOperatorKind.Add ? c : -c));
+                    steps.Add(new LoopStep(local.Local, compound.OperatorKind == BinaryOperatorKind.Add ? c : -c));
                     break;
                 case ISimpleAssignmentOperation
                 {
                     Target: ILocalReferenceOperation self,
                     Value: IBinaryOperation { OperatorKind: BinaryOperatorKind.Add or BinaryOperatorKind.Subtract, LeftOperand: ILocalReferenceOperation again, RightOperand.ConstantValue: { HasValue: true, Value: int c } } step,
                 } when SymbolEqualityComparer.Default.Equals(self.Local, again.Local):
-                    steps.Add((self.Local, step.OperatorKind == BinaryOperatorKind.Add ? c : -c));
+                    steps.Add(new LoopStep(self.Local, step.OperatorKind == BinaryOperatorKind.Add ? c : -c));
                     break;
                 case ISimpleAssignmentOperation { Target: ILocalReferenceOperation copy, Value: ILocalReferenceOperation of }:
-                    copies.Add((copy.Local, of.Local, order));
+                    copies.Add(new LoopCopy(copy.Local, of.Local, order));
                     break;
                 default:
                     throw new NotModelledException($"the loop advances with `{ExpressionReader.Short(op.Syntax)}`, not by a constant step", op.Syntax);
@@ -538,7 +546,7 @@ internal sealed partial class LoopNestReader
             }
         }
 
-        var assigned = new List<(IOperation Operation, ILocalSymbol Local)>();
+        var assigned = new List<LocalWrite>();
         var operations = _method.Operations;
         foreach (var op in operations.Descendants(loop))
         {
@@ -549,7 +557,7 @@ internal sealed partial class LoopNestReader
 
             if (WrittenTarget.Of(op) is ILocalReferenceOperation local)
             {
-                assigned.Add((op, local.Local));
+                assigned.Add(new LocalWrite(op, local.Local));
             }
         }
 

@@ -14,10 +14,20 @@ namespace FvGen.Analyzers.Extraction;
 /// </summary>
 internal static class MethodReader
 {
+    // Classes, not tuples: collections of them run the framework's shared precompiled code instead of
+    // code the JIT compiles for each value-type instantiation in every fresh compiler process.
+    private sealed record PendingBody(IOperation Body, MethodContext Context);
+
+    /// <summary>A loop nest of a body, with the bindings of the code before it.</summary>
+    private sealed record Nest(IOperation Loop, Dictionary<ISymbol, Binding> Outer);
+
+    /// <summary>The arrays a nest writes, reads and differences, and whether it only assigns its elements.</summary>
+    private sealed record NestAccesses(HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned);
+
     public static IReadOnlyList<ConservationIssue> Analyze(IOperation body, MethodContext method)
     {
-        var pending = new Queue<(IOperation Body, MethodContext Context)>();
-        pending.Enqueue((body, method));
+        var pending = new Queue<PendingBody>();
+        pending.Enqueue(new PendingBody(body, method));
         while (pending.Count > 0)
         {
             var (next, context) = pending.Dequeue();
@@ -28,7 +38,7 @@ internal static class MethodReader
                 if (localFunction.Body is { } localBody)
                 {
                     // Its own face arrays and bindings; the issues go to the same list.
-                    pending.Enqueue((localBody, context.ForLocalFunction(FaceParametersOf(localFunction.Symbol, next, context))));
+                    pending.Enqueue(new PendingBody(localBody, context.ForLocalFunction(FaceParametersOf(localFunction.Symbol, next, context))));
                 }
             }
         }
@@ -76,7 +86,7 @@ internal static class MethodReader
 
     private static void AnalyzeBody(IOperation body, MethodContext method, List<ILocalFunctionOperation> localFunctions)
     {
-        var nests = new List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)>();
+        var nests = new List<Nest>();
         var outer = new Dictionary<ISymbol, Binding>(SymbolEqualityComparer.Default);
         foreach (var (name, values) in ConstantTables.Find(body, method.Operations))
         {
@@ -117,7 +127,7 @@ internal static class MethodReader
         }
     }
 
-    private static void Walk(IOperation? operation, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests, MethodContext method, List<ILocalFunctionOperation> localFunctions)
+    private static void Walk(IOperation? operation, Dictionary<ISymbol, Binding> outer, List<Nest> nests, MethodContext method, List<ILocalFunctionOperation> localFunctions)
     {
         switch (operation)
         {
@@ -202,9 +212,9 @@ internal static class MethodReader
         }
     }
 
-    private static void AddNest(IOperation loop, Dictionary<ISymbol, Binding> outer, List<(IOperation, Dictionary<ISymbol, Binding>)> nests, OperationIndex operations)
+    private static void AddNest(IOperation loop, Dictionary<ISymbol, Binding> outer, List<Nest> nests, OperationIndex operations)
     {
-        nests.Add((loop, new Dictionary<ISymbol, Binding>(outer, SymbolEqualityComparer.Default)));
+        nests.Add(new Nest(loop, new Dictionary<ISymbol, Binding>(outer, SymbolEqualityComparer.Default)));
 
         // A local the loop assigns (a reduction such as the largest wave speed) is, after it, a symbol.
         foreach (var local in AssignedLocals(loop, operations))
@@ -291,7 +301,7 @@ internal static class MethodReader
     /// at the cell it writes (a residual used by an update) stays cell data, and the loop that fills
     /// it is checked as an update.
     /// </summary>
-    private static void MarkDefinitions(List<(IOperation Loop, Dictionary<ISymbol, Binding> Outer)> nests, List<(HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned)> accesses, MethodContext method)
+    private static void MarkDefinitions(List<Nest> nests, List<NestAccesses> accesses, MethodContext method)
     {
 
         // From the last loop back: arrays read by a later definition (face states feeding a flux pass)
@@ -324,13 +334,13 @@ internal static class MethodReader
         }
     }
 
-    private static bool IsDefinition((HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned) access, MethodContext method)
+    private static bool IsDefinition(NestAccesses access, MethodContext method)
     {
         var (written, _, _, onlyAssigned) = access;
         return written.Count > 0 && onlyAssigned && written.All(method.FaceArrays.Contains);
     }
 
-    private static (HashSet<string> Written, HashSet<string> Read, HashSet<string> Differenced, bool OnlyAssigned) Accesses(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
+    private static NestAccesses Accesses(IOperation loop, Dictionary<ISymbol, Binding> outer, MethodContext method)
     {
         var reader = new ExpressionReader(method, outer);
         var written = new HashSet<string>(System.StringComparer.Ordinal);
@@ -395,7 +405,7 @@ internal static class MethodReader
         var differenced = new HashSet<string>(
             subscripts.Where(s => s.Value.Any(i => !writtenAt.Contains(i)) || (writtenAt.Count > 1 && s.Value.Count > 1)).Select(s => s.Key),
             System.StringComparer.Ordinal);
-        return (written, read, differenced, onlyAssigned);
+        return new NestAccesses(written, read, differenced, onlyAssigned);
     }
 
     private static bool WritesElements(IOperation loop, OperationIndex operations) =>

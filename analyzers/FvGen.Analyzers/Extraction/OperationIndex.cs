@@ -38,22 +38,25 @@ internal sealed class OperationIndex
         var nodes = new IOperation[256];
         var ends = new int[256];
         int count = 0;
-        var open = new List<(int Position, IOperation.OperationList.Enumerator Children)>();
+        // The open nodes, a stack in two arrays: a list of (position, enumerator) tuples would be framework
+        // code the JIT compiles for that value type in every fresh compiler process.
+        var openPositions = new int[64];
+        var openChildren = new IOperation.OperationList.Enumerator[64];
+        int depth = 0;
         Add(root);
-        while (open.Count > 0)
+        while (depth > 0)
         {
-            int top = open.Count - 1;
-            var (position, children) = open[top];
-            if (children.MoveNext())
+            int top = depth - 1;
+            // The enumerator is a struct: it advances in place, in its array element.
+            if (openChildren[top].MoveNext())
             {
-                // The enumerator is a struct: store it back with its new position.
-                open[top] = (position, children);
-                Add(children.Current);
+                Add(openChildren[top].Current);
             }
             else
             {
-                open.RemoveAt(top);
-                ends[position] = count;
+                depth--;
+                ends[openPositions[top]] = count;
+                openChildren[top] = default;
             }
         }
 
@@ -65,8 +68,20 @@ internal sealed class OperationIndex
                 Array.Resize(ref ends, count * 2);
             }
 
+            if (depth == openPositions.Length)
+            {
+                var positions = new int[depth * 2];
+                var children = new IOperation.OperationList.Enumerator[depth * 2];
+                Array.Copy(openPositions, positions, depth);
+                Array.Copy(openChildren, children, depth);
+                openPositions = positions;
+                openChildren = children;
+            }
+
             nodes[count] = node;
-            open.Add((count, node.ChildOperations.GetEnumerator()));
+            openPositions[depth] = count;
+            openChildren[depth] = node.ChildOperations.GetEnumerator();
+            depth++;
             count++;
         }
 

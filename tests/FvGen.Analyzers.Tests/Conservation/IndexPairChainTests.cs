@@ -10,9 +10,9 @@ public sealed class IndexPairChainTests
     [Fact]
     public void Branches_extend_a_shared_parent_without_changing_it()
     {
-        var parent = IndexPairChain.Empty.Extend([(Index(1), Index(2)), (Index(3), Index(4))]);
-        var left = parent.Extend([(Index(5), Index(6))]);
-        var right = parent.Extend([(Index(7), Index(8)), (Index(9), Index(10))]);
+        var parent = IndexPairChain.Empty.Extend([new IndexPair(Index(1), Index(2)), new IndexPair(Index(3), Index(4))]);
+        var left = parent.Extend([new IndexPair(Index(5), Index(6))]);
+        var right = parent.Extend([new IndexPair(Index(7), Index(8)), new IndexPair(Index(9), Index(10))]);
 
         Assert.Equal(["1~2", "3~4"], Render(parent));
         Assert.Equal(["1~2", "3~4", "5~6"], Render(left));
