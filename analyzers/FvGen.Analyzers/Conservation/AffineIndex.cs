@@ -14,13 +14,13 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
 {
     private string? _key;
 
-    public AffineIndex(SymPoly constant, IEnumerable<KeyValuePair<string, SymPoly>> linear)
+    public AffineIndex(SymPoly constant, IEnumerable<SparseEntry<string, SymPoly>> linear)
         : this(constant, Canonical(linear), null)
     {
     }
 
     /// <summary>From a linear part already in canonical form (and its key when known): a shift moves only the constant.</summary>
-    private AffineIndex(SymPoly constant, ImmutableArray<KeyValuePair<string, SymPoly>> linear, string? linearKey)
+    private AffineIndex(SymPoly constant, ImmutableArray<SparseEntry<string, SymPoly>> linear, string? linearKey)
     {
         Constant = constant;
         Linear = linear;
@@ -30,9 +30,9 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     private string? _linearKey;
 
     /// <summary>The non-zero coefficients ordered by variable name (a stable insertion sort: there are one to three).</summary>
-    private static ImmutableArray<KeyValuePair<string, SymPoly>> Canonical(IEnumerable<KeyValuePair<string, SymPoly>> linear)
+    private static ImmutableArray<SparseEntry<string, SymPoly>> Canonical(IEnumerable<SparseEntry<string, SymPoly>> linear)
     {
-        var kept = new List<KeyValuePair<string, SymPoly>>();
+        var kept = new List<SparseEntry<string, SymPoly>>();
         foreach (var l in linear)
         {
             if (l.Value.IsZero)
@@ -56,7 +56,7 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     public SymPoly Constant { get; }
 
     /// <summary>Coefficient of each loop variable, ordinal by variable name, none zero.</summary>
-    public ImmutableArray<KeyValuePair<string, SymPoly>> Linear { get; }
+    public ImmutableArray<SparseEntry<string, SymPoly>> Linear { get; }
 
     /// <summary>Identifies the linear part only (the "shape" of the index); built on first use.</summary>
     public string LinearKey => _linearKey ??= string.Join(";", Linear.Select(l => l.Key + ":" + l.Value));
@@ -66,13 +66,13 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     public bool IsConstant => Linear.IsEmpty;
 
     public static AffineIndex FromConstant(SymPoly constant) =>
-        constant.IsZero ? Zero : new(constant, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, string.Empty);
+        constant.IsZero ? Zero : new(constant, ImmutableArray<SparseEntry<string, SymPoly>>.Empty, string.Empty);
 
     /// <summary>The index 0.</summary>
-    public static AffineIndex Zero { get; } = new(SymPoly.Zero, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, string.Empty);
+    public static AffineIndex Zero { get; } = new(SymPoly.Zero, ImmutableArray<SparseEntry<string, SymPoly>>.Empty, string.Empty);
 
     public static AffineIndex Variable(string name) =>
-        new(SymPoly.Zero, ImmutableArray.Create(new KeyValuePair<string, SymPoly>(name, SymPoly.One)), null);
+        new(SymPoly.Zero, ImmutableArray.Create(new SparseEntry<string, SymPoly>(name, SymPoly.One)), null);
 
     public SymPoly CoefficientOf(string variable)
     {
@@ -115,15 +115,15 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
 
     // Negating or scaling by a non-zero factor keeps every coefficient non-zero and the order: still canonical.
     public static AffineIndex operator -(AffineIndex a) =>
-        new(-a.Constant, a.Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, -l.Value)).ToImmutableArray(), null);
+        new(-a.Constant, a.Linear.Select(l => new SparseEntry<string, SymPoly>(l.Key, -l.Value)).ToImmutableArray(), null);
 
     public static AffineIndex operator -(AffineIndex a, AffineIndex b) => a + (-b);
 
     /// <summary>Product with a loop-invariant factor.</summary>
     public AffineIndex Scale(SymPoly factor) =>
         factor.IsZero
-            ? new(Constant * factor, ImmutableArray<KeyValuePair<string, SymPoly>>.Empty, null)
-            : new(Constant * factor, Linear.Select(l => new KeyValuePair<string, SymPoly>(l.Key, l.Value * factor)).ToImmutableArray(), null);
+            ? new(Constant * factor, ImmutableArray<SparseEntry<string, SymPoly>>.Empty, null)
+            : new(Constant * factor, Linear.Select(l => new SparseEntry<string, SymPoly>(l.Key, l.Value * factor)).ToImmutableArray(), null);
 
     /// <summary>The index after the loop variables move by <paramref name="shift"/> (iteration <c>i → i + n</c>).</summary>
     public AffineIndex Shift(IReadOnlyDictionary<string, long> shift)
@@ -143,7 +143,7 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
     }
 
     /// <summary>The sum of two canonical linear parts by one ordered merge (zero sums dropped): still canonical.</summary>
-    private static ImmutableArray<KeyValuePair<string, SymPoly>> Merge(ImmutableArray<KeyValuePair<string, SymPoly>> a, ImmutableArray<KeyValuePair<string, SymPoly>> b) =>
+    private static ImmutableArray<SparseEntry<string, SymPoly>> Merge(ImmutableArray<SparseEntry<string, SymPoly>> a, ImmutableArray<SparseEntry<string, SymPoly>> b) =>
         OrderedMerge.Sum(a, b, string.CompareOrdinal, static (x, y) => x + y, static v => v.IsZero);
 
     public bool Equals(AffineIndex? other) => other is not null && Key == other.Key;
@@ -164,7 +164,7 @@ internal sealed class AffineIndex : IEquatable<AffineIndex>
 
         foreach (var t in Constant.Terms)
         {
-            var single = SymPoly.Of(new[] { new KeyValuePair<Monomial, Rational>(t.Key, t.Value.Abs()) });
+            var single = SymPoly.Of(new[] { new SparseEntry<Monomial, Rational>(t.Key, t.Value.Abs()) });
             AppendSigned(sb, t.Value.Sign, CSharpText.Of(single));
         }
 

@@ -12,7 +12,7 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
 {
-    private Monomial(ImmutableArray<KeyValuePair<string, int>> powers) => Powers = powers;
+    private Monomial(ImmutableArray<SparseEntry<string, int>> powers) => Powers = powers;
 
     private string? _key;
 
@@ -20,15 +20,15 @@ internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
     public string Key => _key ??= string.Join("*", Powers.Select(p => p.Key + "^" + p.Value));
 
     /// <summary>The empty product, 1.</summary>
-    public static Monomial One { get; } = new(ImmutableArray<KeyValuePair<string, int>>.Empty);
+    public static Monomial One { get; } = new(ImmutableArray<SparseEntry<string, int>>.Empty);
 
     /// <summary>Symbols in ordinal order, each with a non-zero power.</summary>
-    public ImmutableArray<KeyValuePair<string, int>> Powers { get; }
+    public ImmutableArray<SparseEntry<string, int>> Powers { get; }
 
     public bool IsOne => Powers.IsEmpty;
 
     public static Monomial Symbol(string name, int power = 1) =>
-        power == 0 ? One : new Monomial(ImmutableArray.Create(new KeyValuePair<string, int>(name, power)));
+        power == 0 ? One : new Monomial(ImmutableArray.Create(new SparseEntry<string, int>(name, power)));
 
     public static Monomial operator *(Monomial a, Monomial b)
     {
@@ -48,7 +48,7 @@ internal sealed class Monomial : IEquatable<Monomial>, IComparable<Monomial>
     }
 
     public Monomial Reciprocal() =>
-        new(Powers.Select(p => new KeyValuePair<string, int>(p.Key, -p.Value)).ToImmutableArray());
+        new(Powers.Select(p => new SparseEntry<string, int>(p.Key, -p.Value)).ToImmutableArray());
 
     public int PowerOf(string symbol)
     {

@@ -11,14 +11,14 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal static class OrderedMerge
 {
-    public static ImmutableArray<KeyValuePair<TKey, TValue>> Sum<TKey, TValue>(
-        ImmutableArray<KeyValuePair<TKey, TValue>> a,
-        ImmutableArray<KeyValuePair<TKey, TValue>> b,
+    public static ImmutableArray<SparseEntry<TKey, TValue>> Sum<TKey, TValue>(
+        ImmutableArray<SparseEntry<TKey, TValue>> a,
+        ImmutableArray<SparseEntry<TKey, TValue>> b,
         Func<TKey, TKey, int> compare,
         Func<TValue, TValue, TValue> add,
         Func<TValue, bool> isZero)
     {
-        var result = ImmutableArray.CreateBuilder<KeyValuePair<TKey, TValue>>(a.Length + b.Length);
+        var result = ImmutableArray.CreateBuilder<SparseEntry<TKey, TValue>>(a.Length + b.Length);
         int i = 0, j = 0;
         while (i < a.Length && j < b.Length)
         {
@@ -36,7 +36,7 @@ internal static class OrderedMerge
                 var value = add(a[i].Value, b[j].Value);
                 if (!isZero(value))
                 {
-                    result.Add(new KeyValuePair<TKey, TValue>(a[i].Key, value));
+                    result.Add(new SparseEntry<TKey, TValue>(a[i].Key, value));
                 }
 
                 i++;

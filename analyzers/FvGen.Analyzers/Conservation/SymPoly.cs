@@ -16,7 +16,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     private string? _key;
     private string? _text;
 
-    private SymPoly(ImmutableArray<KeyValuePair<Monomial, Rational>> terms) => Terms = terms;
+    private SymPoly(ImmutableArray<SparseEntry<Monomial, Rational>> terms) => Terms = terms;
 
     private string Key => _key ??= BuildKey();
 
@@ -31,12 +31,12 @@ internal sealed class SymPoly : IEquatable<SymPoly>
         return text.ToString();
     }
 
-    public static SymPoly Zero { get; } = new(ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty);
+    public static SymPoly Zero { get; } = new(ImmutableArray<SparseEntry<Monomial, Rational>>.Empty);
 
     public static SymPoly One { get; } = Constant(Rational.One);
 
     /// <summary>Terms in monomial order, none zero.</summary>
-    public ImmutableArray<KeyValuePair<Monomial, Rational>> Terms { get; }
+    public ImmutableArray<SparseEntry<Monomial, Rational>> Terms { get; }
 
     public bool IsZero => Terms.IsEmpty;
 
@@ -63,22 +63,22 @@ internal sealed class SymPoly : IEquatable<SymPoly>
 
     public bool IsMonomial => Terms.Length == 1;
 
-    public static SymPoly Constant(Rational value) => Of(new[] { new KeyValuePair<Monomial, Rational>(Monomial.One, value) });
+    public static SymPoly Constant(Rational value) => Of(new[] { new SparseEntry<Monomial, Rational>(Monomial.One, value) });
 
     public static SymPoly Constant(long value) => Constant(Rational.FromInteger(value));
 
     public static SymPoly Symbol(string name, int power = 1) =>
-        Of(new[] { new KeyValuePair<Monomial, Rational>(Monomial.Symbol(name, power), Rational.One) });
+        Of(new[] { new SparseEntry<Monomial, Rational>(Monomial.Symbol(name, power), Rational.One) });
 
-    public static SymPoly Of(IEnumerable<KeyValuePair<Monomial, Rational>> terms)
+    public static SymPoly Of(IEnumerable<SparseEntry<Monomial, Rational>> terms)
     {
-        if (terms is KeyValuePair<Monomial, Rational>[] { Length: 1 } single)
+        if (terms is SparseEntry<Monomial, Rational>[] { Length: 1 } single)
         {
             // One term (a constant or a symbol): nothing to merge or order.
-            return new SymPoly(single[0].Value.IsZero ? ImmutableArray<KeyValuePair<Monomial, Rational>>.Empty : ImmutableArray.Create(single[0]));
+            return new SymPoly(single[0].Value.IsZero ? ImmutableArray<SparseEntry<Monomial, Rational>>.Empty : ImmutableArray.Create(single[0]));
         }
 
-        var list = new List<KeyValuePair<Monomial, Rational>>();
+        var list = new List<SparseEntry<Monomial, Rational>>();
         foreach (var t in terms)
         {
             list.Add(t);
@@ -92,7 +92,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     /// with loops of our own: a coefficient has a few terms, and the framework's sorted collections
     /// over this value-type pair would be compiled by the JIT in every compiler process.
     /// </summary>
-    private static SymPoly Normalized(List<KeyValuePair<Monomial, Rational>> terms)
+    private static SymPoly Normalized(List<SparseEntry<Monomial, Rational>> terms)
     {
         for (int k = 1; k < terms.Count; k++)
         {
@@ -107,7 +107,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
             terms[at] = item;
         }
 
-        var result = ImmutableArray.CreateBuilder<KeyValuePair<Monomial, Rational>>(terms.Count);
+        var result = ImmutableArray.CreateBuilder<SparseEntry<Monomial, Rational>>(terms.Count);
         for (int k = 0; k < terms.Count;)
         {
             var monomial = terms[k].Key;
@@ -119,7 +119,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
 
             if (!value.IsZero)
             {
-                result.Add(new KeyValuePair<Monomial, Rational>(monomial, value));
+                result.Add(new SparseEntry<Monomial, Rational>(monomial, value));
             }
         }
 
@@ -129,10 +129,10 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     /// <summary>Each term's value changed by <paramref name="map"/> (never to zero: negation and non-zero scaling).</summary>
     private SymPoly MapValues(Func<Rational, Rational> map)
     {
-        var result = ImmutableArray.CreateBuilder<KeyValuePair<Monomial, Rational>>(Terms.Length);
+        var result = ImmutableArray.CreateBuilder<SparseEntry<Monomial, Rational>>(Terms.Length);
         foreach (var t in Terms)
         {
-            result.Add(new KeyValuePair<Monomial, Rational>(t.Key, map(t.Value)));
+            result.Add(new SparseEntry<Monomial, Rational>(t.Key, map(t.Value)));
         }
 
         return new SymPoly(result.MoveToImmutable());
@@ -144,7 +144,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
     /// The sum of two canonical term lists (monomial order, none zero) by one ordered merge: the same
     /// result as <see cref="Of"/> on their concatenation, without re-sorting.
     /// </summary>
-    private static SymPoly Merge(ImmutableArray<KeyValuePair<Monomial, Rational>> a, ImmutableArray<KeyValuePair<Monomial, Rational>> b) =>
+    private static SymPoly Merge(ImmutableArray<SparseEntry<Monomial, Rational>> a, ImmutableArray<SparseEntry<Monomial, Rational>> b) =>
         new(OrderedMerge.Sum(a, b, static (x, y) => x.CompareTo(y), static (x, y) => x + y, static v => v.IsZero));
 
     public static SymPoly operator -(SymPoly a) => a.MapValues(static v => -v);
@@ -170,15 +170,15 @@ internal sealed class SymPoly : IEquatable<SymPoly>
 
         if (a.IsMonomial && b.IsMonomial)
         {
-            return Of(new[] { new KeyValuePair<Monomial, Rational>(a.Terms[0].Key * b.Terms[0].Key, a.Terms[0].Value * b.Terms[0].Value) });
+            return Of(new[] { new SparseEntry<Monomial, Rational>(a.Terms[0].Key * b.Terms[0].Key, a.Terms[0].Value * b.Terms[0].Value) });
         }
 
-        var products = new List<KeyValuePair<Monomial, Rational>>(a.Terms.Length * b.Terms.Length);
+        var products = new List<SparseEntry<Monomial, Rational>>(a.Terms.Length * b.Terms.Length);
         foreach (var x in a.Terms)
         {
             foreach (var y in b.Terms)
             {
-                products.Add(new KeyValuePair<Monomial, Rational>(x.Key * y.Key, x.Value * y.Value));
+                products.Add(new SparseEntry<Monomial, Rational>(x.Key * y.Key, x.Value * y.Value));
             }
         }
 
@@ -196,7 +196,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
         }
 
         var t = Terms[0];
-        return new SymPoly(ImmutableArray.Create(new KeyValuePair<Monomial, Rational>(t.Key.Reciprocal(), Rational.One / t.Value)));
+        return new SymPoly(ImmutableArray.Create(new SparseEntry<Monomial, Rational>(t.Key.Reciprocal(), Rational.One / t.Value)));
     }
 
     /// <summary>Sign of the leading term (used to pull a sign out of a canonical sum).</summary>

@@ -12,7 +12,7 @@ internal static class Kernel
         AffineIndex.Variable(variable) + AffineIndex.FromConstant(SymPoly.Constant(offset));
 
     public static AffineIndex Lin(long constant, params (string Variable, SymPoly Coefficient)[] parts) =>
-        new(SymPoly.Constant(constant), parts.Select(p => new KeyValuePair<string, SymPoly>(p.Variable, p.Coefficient)));
+        new(SymPoly.Constant(constant), parts.Select(p => new SparseEntry<string, SymPoly>(p.Variable, p.Coefficient)));
 
     public static SumExpr Read(string array, params AffineIndex[] index) => Read(array, DataRole.Cell, index);
 

@@ -34,8 +34,8 @@ public sealed class RefinementTests
         var stride = SymPoly.Symbol("nx") + SymPoly.One;
         AffineIndex C(long di, long dj) => new AffineIndex(SymPoly.Constant(di) + (stride * Rational.FromInteger(dj)), new[]
         {
-            new KeyValuePair<string, SymPoly>("i", SymPoly.One),
-            new KeyValuePair<string, SymPoly>("j", stride),
+            new SparseEntry<string, SymPoly>("i", SymPoly.One),
+            new SparseEntry<string, SymPoly>("j", stride),
         });
         var value = -Div(Read("F", C(1, 0)) - Read("F", C(0, 0)), Sym("dx")) - Div(Read("G", C(0, 1)) - Read("G", C(0, 0)), Sym("dy"));
         Assert.Empty(Check(IJ, Assign("R", Cell(C(0, 0)), value)));
@@ -47,8 +47,8 @@ public sealed class RefinementTests
         // G[(j+1)*(nx+1) + i] - G[j*nx + i]: the second read was pasted from a cell-centred loop of row
         // length nx, so its linear part differs and no shift relates the two.
         var stride = SymPoly.Symbol("nx") + SymPoly.One;
-        var linear = new[] { new KeyValuePair<string, SymPoly>("i", SymPoly.One), new KeyValuePair<string, SymPoly>("j", stride) };
-        var cellRow = new[] { new KeyValuePair<string, SymPoly>("i", SymPoly.One), new KeyValuePair<string, SymPoly>("j", SymPoly.Symbol("nx")) };
+        var linear = new[] { new SparseEntry<string, SymPoly>("i", SymPoly.One), new SparseEntry<string, SymPoly>("j", stride) };
+        var cellRow = new[] { new SparseEntry<string, SymPoly>("i", SymPoly.One), new SparseEntry<string, SymPoly>("j", SymPoly.Symbol("nx")) };
         var here = new AffineIndex(SymPoly.Zero, linear);
         var above = new AffineIndex(stride, linear);
         var value = -Div(Read("G", above) - Read("G", new AffineIndex(SymPoly.Zero, cellRow)), Sym("dy"));
@@ -62,7 +62,7 @@ public sealed class RefinementTests
     {
         // G[c + nx] with c = j*(nx+1) + i equals G at (i - 1, j + 1): conservative (if inconsistent).
         var stride = SymPoly.Symbol("nx") + SymPoly.One;
-        var linear = new[] { new KeyValuePair<string, SymPoly>("i", SymPoly.One), new KeyValuePair<string, SymPoly>("j", stride) };
+        var linear = new[] { new SparseEntry<string, SymPoly>("i", SymPoly.One), new SparseEntry<string, SymPoly>("j", stride) };
         var here = new AffineIndex(SymPoly.Zero, linear);
         var value = Read("G", new AffineIndex(SymPoly.Symbol("nx"), linear)) - Read("G", here);
         Assert.Empty(Check(IJ, Assign("R", Cell(here), value)));
