@@ -385,15 +385,15 @@ internal static class ShiftMatcher
         CallExpr x, CallExpr y, IndexPairChain acc)
     {
         int n = x.Arguments.Length;
-        IEnumerable<(int[] Order, int[] ArgumentSigns, int Sign)> orders = x.Symmetry switch
+        IEnumerable<ArgumentOrder> orders = x.Symmetry switch
         {
-            CallSymmetry.Symmetric => Permutations(n).Select(p => (p, Enumerable.Repeat(1, n).ToArray(), 1)),
+            CallSymmetry.Symmetric => Permutations(n).Select(p => new ArgumentOrder(p, Filled(n, 1), 1)),
             CallSymmetry.Antisymmetric when n >= 2 => new[]
             {
-                (Enumerable.Range(0, n).ToArray(), Enumerable.Repeat(1, n).ToArray(), 1),
-                (Enumerable.Range(0, n).Select(k => k == 0 ? 1 : k == 1 ? 0 : k).ToArray(), Enumerable.Range(0, n).Select(k => k == 2 ? -1 : 1).ToArray(), -1),
+                new ArgumentOrder(Identity(n), Filled(n, 1), 1),
+                new ArgumentOrder(FirstTwoSwapped(n), ThirdNegated(n), -1),
             },
-            _ => new[] { (Enumerable.Range(0, n).ToArray(), Enumerable.Repeat(1, n).ToArray(), 1) },
+            _ => new[] { new ArgumentOrder(Identity(n), Filled(n, 1), 1) },
         };
 
         foreach (var (order, argumentSigns, sign) in orders)
@@ -499,15 +499,65 @@ internal static class ShiftMatcher
         return (-scaled).Equals(cx) ? -1 : 0;
     }
 
+    /// <summary>
+    /// How a call's arguments are matched to its counterpart's: the counterpart argument for each, the sign each
+    /// must match with, and the sign of the whole call. (A class, not a tuple, so that queries over it run the
+    /// framework's shared precompiled code; the small array helpers below stand in for Enumerable.Range and
+    /// Repeat over int for the same reason.)
+    /// </summary>
+    private sealed record ArgumentOrder(int[] Order, int[] ArgumentSigns, int Sign);
+
+    private static int[] Identity(int n)
+    {
+        var order = new int[n];
+        for (int k = 0; k < n; k++)
+        {
+            order[k] = k;
+        }
+
+        return order;
+    }
+
+    private static int[] Filled(int n, int value)
+    {
+        var values = new int[n];
+        for (int k = 0; k < n; k++)
+        {
+            values[k] = value;
+        }
+
+        return values;
+    }
+
+    /// <summary>The order for an antisymmetric flux, F(a, b, n) = −F(b, a, −n): the first two arguments trade places.</summary>
+    private static int[] FirstTwoSwapped(int n)
+    {
+        var order = Identity(n);
+        (order[0], order[1]) = (1, 0);
+        return order;
+    }
+
+    /// <summary>The signs that go with <see cref="FirstTwoSwapped"/>: a third argument, if any, enters negated.</summary>
+    private static int[] ThirdNegated(int n)
+    {
+        var signs = Filled(n, 1);
+        if (n > 2)
+        {
+            signs[2] = -1;
+        }
+
+        return signs;
+    }
+
     private static IEnumerable<int[]> Permutations(int n)
     {
         if (n > 4)
         {
-            yield return Enumerable.Range(0, n).ToArray();
+            yield return Identity(n);
             yield break;
         }
 
-        foreach (var p in Permute(Enumerable.Range(0, n).ToList()))
+        foreach (var p in Permute(new List<int>(Identity(n))))
         {
             yield return p.ToArray();
         }

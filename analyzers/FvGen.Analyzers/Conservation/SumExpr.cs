@@ -52,18 +52,18 @@ internal sealed class SumExpr
             return single[0].Coefficient.IsZero ? new SumExpr(ImmutableArray<Term>.Empty) : new SumExpr(ImmutableArray.Create(single[0]));
         }
 
-        var byBody = new Dictionary<string, (SymPoly Coefficient, Term First, List<int>? Origins)>(StringComparer.Ordinal);
+        var byBody = new Dictionary<string, BodySum>(StringComparer.Ordinal);
         foreach (var t in terms)
         {
             if (byBody.TryGetValue(t.BodyKey, out var current))
             {
-                var origins = current.Origins ?? new List<int>(current.First.Origins);
-                origins.AddRange(t.Origins);
-                byBody[t.BodyKey] = (current.Coefficient + t.Coefficient, current.First, origins);
+                current.Origins ??= new List<int>(current.First.Origins);
+                current.Origins.AddRange(t.Origins);
+                current.Coefficient += t.Coefficient;
             }
             else
             {
-                byBody[t.BodyKey] = (t.Coefficient, t, null);
+                byBody[t.BodyKey] = new BodySum(t);
             }
         }
 
@@ -299,4 +299,23 @@ internal sealed class SumExpr
     }
 
     public override string ToString() => Render();
+
+    /// <summary>
+    /// The terms of one body met so far: their summed coefficient, the first of them and, once a second comes,
+    /// every origin. A class, not a tuple: a dictionary of it runs the framework's shared precompiled code.
+    /// </summary>
+    private sealed class BodySum
+    {
+        public BodySum(Term first)
+        {
+            First = first;
+            Coefficient = first.Coefficient;
+        }
+
+        public Term First { get; }
+
+        public SymPoly Coefficient { get; set; }
+
+        public List<int>? Origins { get; set; }
+    }
 }
