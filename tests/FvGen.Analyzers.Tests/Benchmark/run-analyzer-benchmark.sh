@@ -117,5 +117,9 @@ echo "build without analyzers: $without s"
 echo "build with analyzers:    $with s"
 spread() { sort -g "$1" | awk 'NR == 1 { lo = $1 } { hi = $1 } END { print lo "–" hi }'; }
 echo "FvGen analyzer time:     $analyzers s ($(echo "scale=1; 100 * $analyzers / $with" | bc) % of the build with them; runs $(spread fvgen.txt) s)"
+# Each run's own share (its analyzer time over its own build): on a noisy machine the runs' shares
+# scatter more than the ratio of the medians shows.
+paste times-true.txt fvgen.txt | awk '{ printf "%.1f\n", 100 * $2 / $1 }' > shares.txt
+echo "share of each run:       median $(median < shares.txt) % (runs $(spread shares.txt) %)"
 echo "build time added:        $(echo "scale=1; 100 * ($with - $without) / $without" | bc) % of the build without them"
 echo "files in $WORK"
