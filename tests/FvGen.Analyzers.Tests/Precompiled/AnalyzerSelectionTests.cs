@@ -1,6 +1,3 @@
-using System.Diagnostics;
-using System.Text.Json;
-
 namespace FvGen.Analyzers.Tests.Precompiled;
 
 /// <summary>
@@ -57,8 +54,9 @@ public sealed class AnalyzerSelectionTests : IDisposable
 
     private IReadOnlyList<string> AnalyzersAfterSelection(string extraArgument)
     {
-        string project = Path.Combine(_directory, "Selection.proj");
-        File.WriteAllText(project, $"""
+        using var json = MsBuildQuery.Run(
+            _directory,
+            $"""
             <Project>
               <PropertyGroup><NETCoreSdkRuntimeIdentifier>{Rid}</NETCoreSdkRuntimeIdentifier></PropertyGroup>
               <ItemGroup>
@@ -68,31 +66,10 @@ public sealed class AnalyzerSelectionTests : IDisposable
               <Import Project="{PrecompiledImage.SelectionTargets}" />
               <Target Name="CoreCompile" />
             </Project>
-            """);
-        var start = new ProcessStartInfo("dotnet")
-        {
-            WorkingDirectory = _directory,
-            RedirectStandardOutput = true,
-            RedirectStandardError = true,
-        };
-        foreach (string argument in new[] { "msbuild", project, "-nologo", "-t:CoreCompile", "-getItem:Analyzer", extraArgument }.Where(a => a.Length > 0))
-        {
-            start.ArgumentList.Add(argument);
-        }
-
-        // The test host inherits the outer build's MSBuild settings; this MSBuild must start clean.
-        foreach (string key in start.Environment.Keys.Where(k => k.StartsWith("MSBUILD", StringComparison.OrdinalIgnoreCase)).ToList())
-        {
-            start.Environment.Remove(key);
-        }
-
-        using var process = Process.Start(start)!;
-        var output = process.StandardOutput.ReadToEndAsync();
-        var error = process.StandardError.ReadToEndAsync();
-        process.WaitForExit();
-        Assert.True(process.ExitCode == 0, $"dotnet msbuild failed ({process.ExitCode}):\n{output.Result}\n{error.Result}");
-
-        using var json = JsonDocument.Parse(output.Result);
+            """,
+            "-t:CoreCompile",
+            "-getItem:Analyzer",
+            extraArgument);
         return json.RootElement.GetProperty("Items").GetProperty("Analyzer").EnumerateArray()
             .Select(item => item.GetProperty("FullPath").GetString()!)
             .ToList();

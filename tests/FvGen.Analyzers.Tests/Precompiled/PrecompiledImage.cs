@@ -14,6 +14,8 @@ internal static class PrecompiledImage
 
     public static string SelectionTargets => Metadata("FvGen.AnalyzerSelectionTargets");
 
+    public static string PrecompileTargets => Metadata("FvGen.AnalyzerPrecompileTargets");
+
     private static string Metadata(string key) =>
         typeof(PrecompiledImage).Assembly.GetCustomAttributes<AssemblyMetadataAttribute>()
             .SingleOrDefault(a => a.Key == key)?.Value
