@@ -966,6 +966,6 @@ internal static class BalanceChecker
         return text.ToString();
     }
 
-    /// <summary>A class member and the cell it updates (a class, not a tuple, for the reason given at <see cref="MeasuredWrite"/>).</summary>
+    /// <summary>A class member and the cell it updates.</summary>
     private sealed record MemberCell(ClassMember Member, string Cell);
 }

@@ -9,19 +9,17 @@ namespace FvGen.Analyzers.Conservation;
 /// </summary>
 internal sealed class IndexPairChain
 {
-    private readonly AffineIndex? _a;
-    private readonly AffineIndex? _b;
+    private readonly IndexPair? _pair;
     private readonly IndexPairChain? _rest;
 
-    private IndexPairChain(AffineIndex? a, AffineIndex? b, IndexPairChain? rest, int count)
+    private IndexPairChain(IndexPair? pair, IndexPairChain? rest, int count)
     {
-        _a = a;
-        _b = b;
+        _pair = pair;
         _rest = rest;
         Count = count;
     }
 
-    public static IndexPairChain Empty { get; } = new(null, null, null, 0);
+    public static IndexPairChain Empty { get; } = new(null, null, 0);
 
     public int Count { get; }
 
@@ -29,9 +27,9 @@ internal sealed class IndexPairChain
     public IndexPairChain Extend(List<IndexPair> pairs)
     {
         var chain = this;
-        foreach (var (a, b) in pairs)
+        foreach (var pair in pairs)
         {
-            chain = new IndexPairChain(a, b, chain, chain.Count + 1);
+            chain = new IndexPairChain(pair, chain, chain.Count + 1);
         }
 
         return chain;
@@ -44,7 +42,7 @@ internal sealed class IndexPairChain
         int k = Count;
         for (var link = this; link.Count > 0; link = link._rest!)
         {
-            result[--k] = new IndexPair(link._a!, link._b!);
+            result[--k] = link._pair!;
         }
 
         return result;

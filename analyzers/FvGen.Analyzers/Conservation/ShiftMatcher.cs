@@ -501,9 +501,8 @@ internal static class ShiftMatcher
 
     /// <summary>
     /// How a call's arguments are matched to its counterpart's: the counterpart argument for each, the sign each
-    /// must match with, and the sign of the whole call. (A class, not a tuple, so that queries over it run the
-    /// framework's shared precompiled code; the small array helpers below stand in for Enumerable.Range and
-    /// Repeat over int for the same reason.)
+    /// must match with, and the sign of the whole call. The small array helpers below stand in for
+    /// Enumerable.Range and Repeat over int, whose iterators the JIT would compile in every fresh compiler.
     /// </summary>
     private sealed record ArgumentOrder(int[] Order, int[] ArgumentSigns, int Sign);
 

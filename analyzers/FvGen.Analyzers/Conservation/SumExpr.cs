@@ -302,7 +302,7 @@ internal sealed class SumExpr
 
     /// <summary>
     /// The terms of one body met so far: their summed coefficient, the first of them and, once a second comes,
-    /// every origin. A class, not a tuple: a dictionary of it runs the framework's shared precompiled code.
+    /// every origin.
     /// </summary>
     private sealed class BodySum
     {

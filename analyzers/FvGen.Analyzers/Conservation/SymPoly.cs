@@ -89,8 +89,7 @@ internal sealed class SymPoly : IEquatable<SymPoly>
 
     /// <summary>
     /// Terms put in monomial order with equal monomials added and zeros dropped. An insertion sort
-    /// with loops of our own: a coefficient has a few terms, and the framework's sorted collections
-    /// over this value-type pair would be compiled by the JIT in every compiler process.
+    /// with loops of our own: a coefficient has a few terms.
     /// </summary>
     private static SymPoly Normalized(List<SparseEntry<Monomial, Rational>> terms)
     {

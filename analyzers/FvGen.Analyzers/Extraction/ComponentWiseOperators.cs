@@ -48,8 +48,7 @@ internal static class ComponentWiseOperators
         return seen.SetEquals(fields);
     }
 
-    /// <summary>A field of the operator's result and the expression it is given; field null for a constructor argument.
-    /// (A class, not a tuple: lists of it run the framework's shared precompiled code, not code JIT-compiled for a value type.)</summary>
+    /// <summary>A field of the operator's result and the expression it is given; field null for a constructor argument.</summary>
     private sealed record Component(string? Field, ExpressionSyntax Value);
 
     /// <summary>The (field, value) pairs the operator builds its result from; field null for a constructor argument.</summary>

@@ -228,7 +228,6 @@ internal sealed partial class LoopNestReader
     /// </summary>
     private string? FacesRoot(IOperation body, ISymbol position)
     {
-        // PositionUse is a class, not a tuple, for the reason given at LoopStep.
         var uses = new List<PositionUse>();
         foreach (var use in body.Descendants().OfType<ILocalReferenceOperation>().Where(l => SymbolEqualityComparer.Default.Equals(l.Local, position)))
         {

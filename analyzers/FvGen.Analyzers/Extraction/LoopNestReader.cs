@@ -25,8 +25,7 @@ internal sealed partial class LoopNestReader
     private bool _parallel;
     private int _depth;
 
-    // Classes, not tuples: collections of them run the framework's shared precompiled code instead of
-    // code the JIT compiles for each value-type instantiation in every fresh compiler process.
+    // Records, not tuples, here and elsewhere in the analyzer: see DEVELOPERS.md, "Precompiled analyzer".
     private sealed record LoopStep(ILocalSymbol Local, long Step);
 
     private sealed record LoopCopy(ILocalSymbol Copy, ILocalSymbol Of, int Order);

@@ -14,8 +14,7 @@ namespace FvGen.Analyzers.Extraction;
 /// </summary>
 internal static class MethodReader
 {
-    // Classes, not tuples: collections of them run the framework's shared precompiled code instead of
-    // code the JIT compiles for each value-type instantiation in every fresh compiler process.
+    // Records, not tuples: see DEVELOPERS.md, "Precompiled analyzer".
     private sealed record PendingBody(IOperation Body, MethodContext Context);
 
     /// <summary>A loop nest of a body, with the bindings of the code before it.</summary>

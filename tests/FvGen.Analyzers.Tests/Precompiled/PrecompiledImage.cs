@@ -8,7 +8,8 @@ namespace FvGen.Analyzers.Tests.Precompiled;
 /// </summary>
 internal static class PrecompiledImage
 {
-    public static bool Expected => Metadata("FvGen.PrecompiledAnalyzerExpected") == "true";
+    // MSBuild compares property values without regard to case, so "True" asks for the image too.
+    public static bool Expected => string.Equals(Metadata("FvGen.PrecompiledAnalyzerExpected"), "true", StringComparison.OrdinalIgnoreCase);
 
     public static string Path => Metadata("FvGen.PrecompiledAnalyzerPath");
 
