@@ -1,5 +1,5 @@
-// expect: FVC0001 FVC0002
-// why: the east energy face averages EnergyFlux of cell i with MomentumFlux of cell i+1, so EnergyFlux(…[•]) no longer cancels and MomentumFlux(…[•+1]) enters the energy with no counterpart.
+// expect: FVC0001 FVC0003
+// why: the east energy face averages EnergyFlux of cell i with MomentumFlux of cell i+1; the two EnergyFlux(…[i]) halves then cancel inside the write, leaving +1/2·EnergyFlux(…[i-1]) and -1/2·MomentumFlux(…[i+1]), each with no counterpart, and the face i+1/2 evaluated with MomentumFlux by cell i and EnergyFlux by cell i+1 (was FVC0001 FVC0002, which counted the cancelling halves as members).
 using System;
 
 namespace Corpus.Euler1D;
