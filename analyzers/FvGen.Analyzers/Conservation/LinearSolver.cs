@@ -9,10 +9,6 @@ namespace FvGen.Analyzers.Conservation;
 internal static class LinearSolver
 {
     /// <summary>
-    /// Solves <c>A x = b</c> (rows of <paramref name="rows"/>, last entry the right side). Free
-    /// unknowns are set to zero. Returns null when the system is inconsistent.
-    /// </summary>
-    /// <summary>
     /// The common system where no row couples two unknowns (each index pair moves one loop variable):
     /// each unknown is read off its rows, which must agree; unknowns no row names are zero, as in
     /// <see cref="Solve"/>. False when some row couples unknowns (then <see cref="Solve"/> decides);
@@ -72,6 +68,10 @@ internal static class LinearSolver
         return true;
     }
 
+    /// <summary>
+    /// Solves <c>A x = b</c> (rows of <paramref name="rows"/>, last entry the right side). Free
+    /// unknowns are set to zero. Returns null when the system is inconsistent.
+    /// </summary>
     public static Rational[]? Solve(List<Rational[]> rows, int unknowns)
     {
         var m = new List<Rational[]>(rows.Count);

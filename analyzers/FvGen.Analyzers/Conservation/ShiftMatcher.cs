@@ -71,43 +71,188 @@ internal static class ShiftMatcher
     /// <summary>
     /// Bodies are kept in a canonical order (products and sums sorted by key, symmetric calls'
     /// arguments too), so B is A moved by n exactly when A shifted by n has B's key. The shift must take
-    /// A's first read onto some read of B of the same shape: those few candidates are tried.
+    /// A's anchor reads onto reads of B of the same shape: those few candidates are tried. The anchor is
+    /// A's first read, or more reads when the first leaves a loop variable out (a coefficient
+    /// <c>ax[j]</c> sorts before <c>c[i - 1, j]</c> in <c>ax[j] · c[i - 1, j]</c> and says nothing of i).
     /// </summary>
     private static Match? FastMatch(Term a, Term b, LoopSpace space)
     {
-        var first = a.Reads.FirstOrDefault();
-        if (first is null)
+        var readsA = a.Reads;
+        if (readsA.Count == 0)
         {
             return a.BodyKey == b.BodyKey ? new Match(ShiftMatcher.NoShift, 1) : null;
         }
 
-        // Many reads of B share A's first read's shape (u[•] in a limiter); each distinct shift is tried once.
-        var tried = new HashSet<string>(StringComparer.Ordinal);
-        var pairs = new List<IndexPair>();
-        foreach (var candidate in b.Reads)
+        var anchors = Anchors(readsA, space.LatticeVariables);
+        var search = new AnchorSearch(a, b, space, anchors);
+        return search.Run(0);
+    }
+
+    /// <summary>
+    /// The reads of a body whose subscripts together name every lattice variable that any of its reads
+    /// names: the first read alone in the common case, else the first and, one at a time, the read
+    /// naming most of the variables still unnamed.
+    /// </summary>
+    private static IReadOnlyList<ReadExpr> Anchors(IReadOnlyList<ReadExpr> reads, IReadOnlyList<LoopVariable> lattice)
+    {
+        if (reads.Count == 1 || lattice.Count < 2 || lattice.Count > 31)
         {
-            if (candidate.ShapeKey != first.ShapeKey || !tried.Add(candidate.Key))
+            return new[] { reads[0] };
+        }
+
+        var masks = new int[reads.Count];
+        int needed = 0;
+        for (int r = 0; r < reads.Count; r++)
+        {
+            masks[r] = VariablesNamed(reads[r], lattice);
+            needed |= masks[r];
+        }
+
+        int covered = masks[0];
+        if (covered == needed)
+        {
+            return new[] { reads[0] };
+        }
+
+        var anchors = new List<ReadExpr> { reads[0] };
+        while (covered != needed)
+        {
+            int best = -1;
+            int bestCount = 0;
+            for (int r = 1; r < reads.Count; r++)
             {
-                continue;
+                int count = BitCount(masks[r] & ~covered);
+                if (count > bestCount)
+                {
+                    best = r;
+                    bestCount = count;
+                }
             }
 
-            pairs.Clear();
-            var shift = PairReads(first, candidate, pairs) ? Solve(pairs, space) : null;
-            if (shift is null)
-            {
-                continue;
-            }
+            anchors.Add(reads[best]);
+            covered |= masks[best];
+        }
 
-            switch (ShiftedEquality.Bodies(a, b, shift))
+        return anchors;
+    }
+
+    /// <summary>The lattice variables a read's subscripts name, as bits in the order of <paramref name="lattice"/>.</summary>
+    private static int VariablesNamed(ReadExpr read, IReadOnlyList<LoopVariable> lattice)
+    {
+        int mask = 0;
+        foreach (var subscript in read.AllSubscripts)
+        {
+            foreach (var index in subscript.AffineParts)
             {
-                case true:
-                    return new Match(shift, 1);
-                case null when a.Shift(shift, out var scale) is { } moved && moved.BodyKey == b.BodyKey:
-                    return new Match(shift, 1, scale);
+                foreach (var linear in index.Linear)
+                {
+                    for (int v = 0; v < lattice.Count; v++)
+                    {
+                        if (lattice[v].Name == linear.Key)
+                        {
+                            mask |= 1 << v;
+                        }
+                    }
+                }
             }
         }
 
-        return null;
+        return mask;
+    }
+
+    private static int BitCount(int mask)
+    {
+        int count = 0;
+        for (; mask != 0; mask &= mask - 1)
+        {
+            count++;
+        }
+
+        return count;
+    }
+
+    /// <summary>
+    /// Tries every choice of a read of B for each anchor read of A (same shape; each distinct choice once),
+    /// solves for the shift the pairs give and compares the bodies under it.
+    /// </summary>
+    private sealed class AnchorSearch
+    {
+        private readonly Term _a;
+        private readonly Term _b;
+        private readonly LoopSpace _space;
+        private readonly IReadOnlyList<ReadExpr> _anchors;
+        private readonly List<IndexPair> _pairs = new();
+        private readonly string[] _chosen;
+
+        // Many reads of B share an anchor's shape (u[•] in a limiter); each distinct choice is tried once.
+        private readonly HashSet<string> _tried = new(StringComparer.Ordinal);
+        private int _budget = MaxAlignments;
+
+        public AnchorSearch(Term a, Term b, LoopSpace space, IReadOnlyList<ReadExpr> anchors)
+        {
+            _a = a;
+            _b = b;
+            _space = space;
+            _anchors = anchors;
+            _chosen = new string[anchors.Count];
+        }
+
+        public Match? Run(int anchor)
+        {
+            var reads = _b.Reads;
+            for (int n = 0; n < reads.Count; n++)
+            {
+                var candidate = reads[n];
+                if (candidate.ShapeKey != _anchors[anchor].ShapeKey)
+                {
+                    continue;
+                }
+
+                int mark = _pairs.Count;
+                _chosen[anchor] = candidate.Key;
+                if (PairReads(_anchors[anchor], candidate, _pairs))
+                {
+                    var match = anchor + 1 < _anchors.Count ? Run(anchor + 1) : TryChoice();
+                    if (match is not null)
+                    {
+                        return match;
+                    }
+                }
+
+                _pairs.RemoveRange(mark, _pairs.Count - mark);
+                if (_budget <= 0)
+                {
+                    return null;
+                }
+            }
+
+            return null;
+        }
+
+        private Match? TryChoice()
+        {
+            _budget--;
+            if (!_tried.Add(_chosen.Length == 1 ? _chosen[0] : string.Join("|", _chosen)))
+            {
+                return null;
+            }
+
+            var shift = Solve(_pairs, _space);
+            if (shift is null)
+            {
+                return null;
+            }
+
+            switch (ShiftedEquality.Bodies(_a, _b, shift))
+            {
+                case true:
+                    return new Match(shift, 1);
+                case null when _a.Shift(shift, out var scale) is { } moved && moved.BodyKey == _b.BodyKey:
+                    return new Match(shift, 1, scale);
+                default:
+                    return null;
+            }
+        }
     }
 
     /// <summary>Only antisymmetric flips need the full alignment search; everything else is canonical.</summary>

@@ -130,7 +130,7 @@ internal sealed class Term
     public bool IsInvariant => Factors.IsEmpty;
 
     /// <summary>Every array read of the body, in factor order (collected once: the matcher and the balance ask often).</summary>
-    public IEnumerable<ReadExpr> Reads => _reads ??= Factors.SelectMany(f => f.Reads).ToArray();
+    public IReadOnlyList<ReadExpr> Reads => _reads ??= Factors.SelectMany(f => f.Reads).ToArray();
 
     private ReadExpr[]? _reads;
 
