@@ -82,19 +82,22 @@ internal static class BalanceChecker
 
         bool oldTotalClaimed = false;
         var unbalanced = new List<ShiftClass>();
-        var sources = new List<ShiftClass>();
+        var carried = new List<CarriedWeight>();
+        bool hasFaceTerms = false;
         foreach (var c in classes)
         {
             var sum = c.Sum;
             if (c.Members.All(IsSource))
             {
-                if (!sum.IsZero)
+                if (assignment && IsOldStateClass(c, measures) && !ConstantPart(sum).IsZero)
                 {
-                    sources.Add(c);
+                    carried.Add(new CarriedWeight(c, ConstantPart(sum).ConstantValue));
                 }
 
                 continue;
             }
+
+            hasFaceTerms = true;
 
             if (GivenAndTakenBack(c))
             {
@@ -106,6 +109,11 @@ internal static class BalanceChecker
             // weight in symbols no flux member carries is a source (−decay·u[i], the old u[i]).
             var sourcePart = SourcePart(c);
             sum -= sourcePart;
+            if (assignment && IsOldStateClass(c, measures) && !ConstantPart(sourcePart).IsZero)
+            {
+                carried.Add(new CarriedWeight(c, ConstantPart(sourcePart).ConstantValue));
+            }
+
             if (assignment && !oldTotalClaimed && sourcePart.IsOne && IsOldStateClass(c, measures))
             {
                 oldTotalClaimed = true;
@@ -132,6 +140,13 @@ internal static class BalanceChecker
             }
 
             unbalanced.Add(c);
+        }
+
+        if (assignment && !oldTotalClaimed && !mapped && hasFaceTerms
+            && !unbalanced.Any(c => IsOldStateClass(c, measures) && Positions(c) > 1)
+            && CarriedWrongly(carried) is { } carriedTotal)
+        {
+            yield return OldTotalAtTheCell(carried, carriedTotal);
         }
 
         if (mapped)
@@ -513,6 +528,50 @@ internal static class BalanceChecker
             c.Members.Skip(1).SelectMany(m => m.Source.Term.Origins).ToImmutableArray(),
             ImmutableDictionary<string, string?>.Empty);
     }
+
+    /// <summary>
+    /// The total numeric weight with which a new state carries single reads of old states at its cell,
+    /// when it cannot be the old total: positive but not 1, with no one state carried with weight
+    /// exactly 1 (which leaves the others to be sources, such as <c>u[i] + 0.5 * q[i]</c>). A weight in
+    /// symbols is a source the loop cannot judge (<c>(1 - k * dt) * u[i]</c> carries 1 and a decay),
+    /// and a negative one a decay in a rate (<c>- 0.5 * u[i]</c>); both are left alone.
+    /// </summary>
+    private static Rational? CarriedWrongly(List<CarriedWeight> carried)
+    {
+        if (carried.Count == 0 || carried.Any(c => c.Constant.IsOne))
+        {
+            return null;
+        }
+
+        var total = Rational.Zero;
+        foreach (var c in carried)
+        {
+            total += c.Constant;
+        }
+
+        return total.Sign > 0 && !total.IsOne ? total : null;
+    }
+
+    /// <summary>FVC0002 for an update form that carries the old total with a numeric weight other than 1 (<c>0.9 * u[i]</c>, <c>u[i] + u[i]</c>).</summary>
+    private static Finding OldTotalAtTheCell(List<CarriedWeight> carried, Rational total)
+    {
+        var first = carried[0].Class.Representative;
+        string weights = string.Join(", ", carried.Select(c => "`" + Text.Short(c.Class.Representative.Term.RenderBody()) + "` " + c.Constant));
+        return new Finding(
+            FindingKind.UnbalancedFaceTerm,
+            ImmutableArray.Create(
+                Text.Short(first.Term.RenderBody()),
+                weights,
+                total.ToString(),
+                "1",
+                "a new state must carry the old total over with weight exactly 1 (a decay of the state is written with its rate, as in `(1 - k * dt) * u[i]`)"),
+            first.Term.Origins,
+            carried.SelectMany(c => c.Class.Members).SelectMany(m => m.Source.Term.Origins).Except(first.Term.Origins).ToImmutableArray(),
+            ImmutableDictionary<string, string?>.Empty);
+    }
+
+    /// <summary>An old state read at the written cell and the numeric part of the weight it is carried with.</summary>
+    private sealed record CarriedWeight(ShiftClass Class, Rational Constant);
 
     private static Finding OneSidedMapped(ShiftClass c, UpdateWrite write)
     {

@@ -47,6 +47,10 @@ internal sealed class ExpressionReader
     {
         switch (operation)
         {
+            case IBinaryOperation { OperatorKind: BinaryOperatorKind.Add or BinaryOperatorKind.Subtract or BinaryOperatorKind.Multiply or BinaryOperatorKind.Divide } folded
+                when folded.ConstantValue.HasValue && folded.Type?.SpecialType is SpecialType.System_Double or SpecialType.System_Single:
+                // The compiler folds `1.0 / 3.0` into the nearest double; read exactly, 1/3 + 2/3 is 1.
+                return ReadBinary(folded);
             case { ConstantValue.HasValue: true } when operation.ConstantValue.Value is not null && IsNumeric(operation.ConstantValue.Value):
                 return Constant(operation.ConstantValue.Value!, operation.Syntax);
             case { ConstantValue.HasValue: true } when operation.ConstantValue.Value is bool b:

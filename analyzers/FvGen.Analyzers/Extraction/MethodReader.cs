@@ -3,6 +3,7 @@ using System.Collections.Immutable;
 using System.Linq;
 using FvGen.Analyzers.Conservation;
 using Microsoft.CodeAnalysis;
+using Microsoft.CodeAnalysis.CSharp.Syntax;
 using Microsoft.CodeAnalysis.Operations;
 
 namespace FvGen.Analyzers.Extraction;
@@ -245,7 +246,9 @@ internal static class MethodReader
                     created = conversion.Operand;
                 }
 
-                if (created is IArrayCreationOperation or IObjectCreationOperation || created is IInvocationOperation { TargetMethod.Name: not "AsSpan" })
+                // `stackalloc double[n]` has no operation kind of its own; its syntax says it is a fresh buffer.
+                if (created is IArrayCreationOperation or IObjectCreationOperation || created is IInvocationOperation { TargetMethod.Name: not "AsSpan" }
+                    || created.Syntax is StackAllocArrayCreationExpressionSyntax or ImplicitStackAllocArrayCreationExpressionSyntax)
                 {
                     return new ArrayBinding(local.Name, method.Known.IsFaceField(local.Type) ? DataRole.Face : DataRole.Cell);
                 }
