@@ -50,6 +50,18 @@ internal static class AnalyzerRun
         return new Result(compilation.GetDiagnostics(), analyzer, exceptions);
     }
 
+    /// <summary>
+    /// Runs every rule on a kernel written without usings (the tests' usings are put in front), after
+    /// checking that it compiles and that no analyzer threw.
+    /// </summary>
+    public static async Task<Result> RunKernelAsync(string kernel)
+    {
+        var result = await RunAsync(TestReferences.Usings + kernel);
+        Assert.True(!result.CompilerErrors.Any(), Describe(result.CompilerErrors));
+        Assert.Empty(result.Exceptions);
+        return result;
+    }
+
     public static string Describe(IEnumerable<Diagnostic> diagnostics) =>
         string.Join("\n", diagnostics.Select(d => $"{d.Id} {d.Location.GetLineSpan().StartLinePosition}: {d.GetMessage(System.Globalization.CultureInfo.InvariantCulture)}"));
 
