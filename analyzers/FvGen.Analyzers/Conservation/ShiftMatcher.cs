@@ -83,8 +83,7 @@ internal static class ShiftMatcher
             return a.BodyKey == b.BodyKey ? new Match(ShiftMatcher.NoShift, 1) : null;
         }
 
-        var anchors = Anchors(readsA, space.LatticeVariables);
-        var search = new AnchorSearch(a, b, space, anchors);
+        var search = new AnchorSearch(a, b, space, a.AnchorsIn(space));
         return search.Run(0);
     }
 
@@ -93,7 +92,7 @@ internal static class ShiftMatcher
     /// names: the first read alone in the common case, else the first and, one at a time, the read
     /// naming most of the variables still unnamed.
     /// </summary>
-    private static IReadOnlyList<ReadExpr> Anchors(IReadOnlyList<ReadExpr> reads, IReadOnlyList<LoopVariable> lattice)
+    public static IReadOnlyList<ReadExpr> Anchors(IReadOnlyList<ReadExpr> reads, IReadOnlyList<LoopVariable> lattice)
     {
         if (reads.Count == 1 || lattice.Count < 2 || lattice.Count > 31)
         {

@@ -134,6 +134,27 @@ internal sealed class Term
 
     private ReadExpr[]? _reads;
 
+    /// <summary>
+    /// The reads the shift matcher anchors on in <paramref name="space"/>: worked out once, since a term is
+    /// matched against many others of its loop (kept for the last space asked, in one field so that a
+    /// reader never sees the reads of one space with another).
+    /// </summary>
+    public IReadOnlyList<ReadExpr> AnchorsIn(LoopSpace space)
+    {
+        var cached = _anchors;
+        if (cached is null || !ReferenceEquals(cached.Space, space))
+        {
+            cached = new AnchorReads(space, ShiftMatcher.Anchors(Reads, space.LatticeVariables));
+            _anchors = cached;
+        }
+
+        return cached.Reads;
+    }
+
+    private AnchorReads? _anchors;
+
+    private sealed record AnchorReads(LoopSpace Space, IReadOnlyList<ReadExpr> Reads);
+
     public Term WithCoefficient(SymPoly coefficient) => new(coefficient, this);
 
     /// <summary>The term at iteration <c>i + n</c> (see the overload that also gives the scale).</summary>
