@@ -144,7 +144,7 @@ internal static class BalanceChecker
 
         if (assignment && !oldTotalClaimed && !mapped && hasFaceTerms
             && !unbalanced.Any(c => IsOldStateClass(c, measures) && Positions(c) > 1)
-            && CarriedWrongly(carried) is { } carriedTotal)
+            && CarriedWrongly(carried, out var carriedTotal))
         {
             yield return OldTotalAtTheCell(carried, carriedTotal);
         }
@@ -530,26 +530,26 @@ internal static class BalanceChecker
     }
 
     /// <summary>
-    /// The total numeric weight with which a new state carries single reads of old states at its cell,
-    /// when it cannot be the old total: positive but not 1, with no one state carried with weight
+    /// True, with the total numeric weight with which a new state carries single reads of old states at
+    /// its cell, when that cannot be the old total: positive but not 1, with no one state carried with weight
     /// exactly 1 (which leaves the others to be sources, such as <c>u[i] + 0.5 * q[i]</c>). A weight in
     /// symbols is a source the loop cannot judge (<c>(1 - k * dt) * u[i]</c> carries 1 and a decay),
     /// and a negative one a decay in a rate (<c>- 0.5 * u[i]</c>); both are left alone.
     /// </summary>
-    private static Rational? CarriedWrongly(List<CarriedWeight> carried)
+    private static bool CarriedWrongly(List<CarriedWeight> carried, out Rational total)
     {
+        total = Rational.Zero;
         if (carried.Count == 0 || carried.Any(c => c.Constant.IsOne))
         {
-            return null;
+            return false;
         }
 
-        var total = Rational.Zero;
         foreach (var c in carried)
         {
             total += c.Constant;
         }
 
-        return total.Sign > 0 && !total.IsOne ? total : null;
+        return total.Sign > 0 && !total.IsOne;
     }
 
     /// <summary>FVC0002 for an update form that carries the old total with a numeric weight other than 1 (<c>0.9 * u[i]</c>, <c>u[i] + u[i]</c>).</summary>
