@@ -488,6 +488,12 @@ internal sealed partial class LoopNestReader
 
         int writesBefore = _writes.Count;
         var before = new Dictionary<ISymbol, Binding>(_reader.Bindings, SymbolEqualityComparer.Default);
+        if (conditional.WhenFalse is null && CellGuard(conditional.Condition) is { } guarded)
+        {
+            ReadGuardedWrites(conditional, guarded, writesBefore, before);
+            return;
+        }
+
         ReadStatement(conditional.WhenTrue);
         var afterTrue = new Dictionary<ISymbol, Binding>(_reader.Bindings, SymbolEqualityComparer.Default);
         Restore(before);
@@ -520,6 +526,71 @@ internal sealed partial class LoopNestReader
             {
                 _reader.Bindings[symbol] = new UnknownBinding($"the local `{symbol.Name}` is set differently in the branches of an `if`");
             }
+        }
+    }
+
+    /// <summary>
+    /// The cell a test such as <c>n &gt;= 0</c> asks for, when <c>n</c> is an index map's value
+    /// (<c>nei[f]</c>, or a local holding it): the face has that cell, or none on that side (−1 marks a
+    /// boundary face in one face list). Other tests (<c>n &gt; 0</c> would skip cell 0) are not guards.
+    /// </summary>
+    private MappedSubscript? CellGuard(IOperation condition)
+    {
+        if (condition is not IBinaryOperation binary)
+        {
+            return null;
+        }
+
+        static int? Constant(IOperation o) => o.ConstantValue is { HasValue: true, Value: int v } ? v : null;
+        IOperation? map = (binary.OperatorKind, Constant(binary.LeftOperand), Constant(binary.RightOperand)) switch
+        {
+            (BinaryOperatorKind.GreaterThanOrEqual, null, 0) => binary.LeftOperand,
+            (BinaryOperatorKind.GreaterThan, null, -1) => binary.LeftOperand,
+            (BinaryOperatorKind.NotEquals, null, -1) => binary.LeftOperand,
+            (BinaryOperatorKind.LessThanOrEqual, 0, null) => binary.RightOperand,
+            (BinaryOperatorKind.LessThan, -1, null) => binary.RightOperand,
+            (BinaryOperatorKind.NotEquals, -1, null) => binary.RightOperand,
+            _ => null,
+        };
+        if (map is null)
+        {
+            return null;
+        }
+
+        try
+        {
+            return _reader.ReadIndex(map) as MappedSubscript;
+        }
+        catch (NotModelledException)
+        {
+            return null;
+        }
+    }
+
+    /// <summary>
+    /// Writes guarded by their own cell's existence (<c>if (n &gt;= 0) res[n] += flux;</c>) are read as
+    /// made: on an interior face they are, and on a boundary face the cell they would reach lies outside
+    /// the mesh, so the flux the other write takes from its cell leaves through the boundary. The branch
+    /// must write only that cell and assign no local; anything else stays a write under a condition.
+    /// </summary>
+    private void ReadGuardedWrites(IConditionalOperation conditional, MappedSubscript guarded, int writesBefore, Dictionary<ISymbol, Binding> before)
+    {
+        ReadStatement(conditional.WhenTrue);
+        bool onlyThatCell = _writes.Count > writesBefore;
+        for (int k = writesBefore; k < _writes.Count && onlyThatCell; k++)
+        {
+            var subscripts = _writes[k].Subscripts;
+            onlyThatCell = subscripts.Length == 1 && subscripts[0].Length == 1 && subscripts[0][0].Key == guarded.Key;
+        }
+
+        foreach (var entry in before)
+        {
+            onlyThatCell &= _reader.Bindings.TryGetValue(entry.Key, out var now) && ReferenceEquals(now, entry.Value);
+        }
+
+        if (!onlyThatCell || _reader.Bindings.Count != before.Count)
+        {
+            throw new NotModelledException("an array element is written under a condition", conditional.Syntax);
         }
     }
 
