@@ -571,7 +571,8 @@ internal sealed partial class LoopNestReader
     /// Writes guarded by their own cell's existence (<c>if (n &gt;= 0) res[n] += flux;</c>) are read as
     /// made: on an interior face they are, and on a boundary face the cell they would reach lies outside
     /// the mesh, so the flux the other write takes from its cell leaves through the boundary. The branch
-    /// must write only that cell and assign no local; anything else stays a write under a condition.
+    /// must write only that cell and assign no local declared outside it; anything else stays a write
+    /// under a condition.
     /// </summary>
     private void ReadGuardedWrites(IConditionalOperation conditional, MappedSubscript guarded, int writesBefore, Dictionary<ISymbol, Binding> before)
     {
@@ -588,10 +589,13 @@ internal sealed partial class LoopNestReader
             onlyThatCell &= _reader.Bindings.TryGetValue(entry.Key, out var now) && ReferenceEquals(now, entry.Value);
         }
 
-        if (!onlyThatCell || _reader.Bindings.Count != before.Count)
+        if (!onlyThatCell)
         {
             throw new NotModelledException("an array element is written under a condition", conditional.Syntax);
         }
+
+        // Locals declared inside the branch end with it.
+        Restore(before);
     }
 
     private void Restore(Dictionary<ISymbol, Binding> snapshot)

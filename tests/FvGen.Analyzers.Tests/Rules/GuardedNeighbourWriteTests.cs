@@ -14,6 +14,7 @@ public sealed class GuardedNeighbourWriteTests
     [InlineData("if (n != -1) { res[n] += flux; }")]
     [InlineData("if (-1 < n) res[n] += flux;")]
     [InlineData("if (nei[f] >= 0) res[nei[f]] += flux;")]
+    [InlineData("if (n >= 0) { double given = flux; res[n] += given; }")]
     public async Task GuardedNeighbourWriteConserves(string guarded)
     {
         var result = await AnalyzerRun.RunKernelAsync(Kernel(guarded));
