@@ -89,9 +89,9 @@ internal static class BalanceChecker
             var sum = c.Sum;
             if (c.Members.All(IsSource))
             {
-                if (assignment && IsOldStateClass(c, measures) && !ConstantPart(sum).IsZero)
+                if (assignment && IsOldStateClass(c, measures) && ConstantPart(sum) is { IsZero: false } constant)
                 {
-                    carried.Add(new CarriedWeight(c, ConstantPart(sum).ConstantValue));
+                    carried.Add(new CarriedWeight(c, constant.ConstantValue));
                 }
 
                 continue;
@@ -109,9 +109,9 @@ internal static class BalanceChecker
             // weight in symbols no flux member carries is a source (−decay·u[i], the old u[i]).
             var sourcePart = SourcePart(c);
             sum -= sourcePart;
-            if (assignment && IsOldStateClass(c, measures) && !ConstantPart(sourcePart).IsZero)
+            if (assignment && IsOldStateClass(c, measures) && ConstantPart(sourcePart) is { IsZero: false } carriedConstant)
             {
-                carried.Add(new CarriedWeight(c, ConstantPart(sourcePart).ConstantValue));
+                carried.Add(new CarriedWeight(c, carriedConstant.ConstantValue));
             }
 
             if (assignment && !oldTotalClaimed && sourcePart.IsOne && IsOldStateClass(c, measures))
